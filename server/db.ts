@@ -1,0 +1,36 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import knexFactory, { type Knex } from 'knex';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+export const migrationsDir = path.join(root, 'migrations');
+
+/** One Knex instance per database file; the pragmas run on every pooled connection. */
+export function createDb(filename: string): Knex {
+  if (filename !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(filename)), { recursive: true });
+  return knexFactory({
+    client: 'better-sqlite3',
+    connection: { filename },
+    useNullAsDefault: true,
+    pool: {
+      min: 1,
+      max: 1,
+      afterCreate(conn: { pragma: (s: string) => unknown }, done: (err: Error | null, c: unknown) => void) {
+        try {
+          conn.pragma('journal_mode = WAL');
+          conn.pragma('foreign_keys = ON');
+          conn.pragma('busy_timeout = 5000');
+          conn.pragma('synchronous = NORMAL');
+          done(null, conn);
+        } catch (err) {
+          done(err as Error, conn);
+        }
+      },
+    },
+  });
+}
+
+export async function migrateLatest(db: Knex): Promise<void> {
+  await db.migrate.latest({ directory: migrationsDir, loadExtensions: ['.ts'] });
+}
