@@ -57,7 +57,7 @@ export async function up(knex: Knex): Promise<void> {
     t.float('crown_dieback_pct');
     t.text('note');
     // A correction is a new row naming the row it replaces; nothing is overwritten.
-    t.integer('corrects_id').references('measurements.id');
+    t.integer('corrects_id').references('measurements.id').index();
     t.integer('recorded_by').references('users.id').onDelete('SET NULL');
     t.timestamp('created_at').notNullable().defaultTo(knex.fn.now());
     t.index(['tree_id', 'season']);

@@ -4,7 +4,13 @@ export const roles = ['owner', 'forester', 'tapper', 'consultant'] as const;
 export const roleSchema = z.enum(roles);
 export type Role = z.infer<typeof roleSchema>;
 
-export const species = ['sugar-maple', 'red-maple', 'black-maple', 'silver-maple', 'other'] as const;
+export const species = [
+  'sugar-maple',
+  'red-maple',
+  'black-maple',
+  'silver-maple',
+  'other',
+] as const;
 export const speciesSchema = z.enum(species);
 export type Species = z.infer<typeof speciesSchema>;
 export const speciesLabels: Record<Species, string> = {

@@ -8,7 +8,12 @@ export const crownDiebackClasses = Array.from({ length: 21 }, (_, i) => i * 5);
 const isoDate = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date as YYYY-MM-DD')
-  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), 'Not a real date');
+  .refine(
+    (s) =>
+      !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) &&
+      new Date(`${s}T00:00:00Z`).toISOString().startsWith(s),
+    'Not a real date',
+  );
 
 export const measurementInputSchema = z.object({
   measuredOn: isoDate,

@@ -4,7 +4,11 @@ import { noteCategorySchema } from './enums';
 export const noteInputSchema = z.object({
   category: noteCategorySchema,
   body: z.string().trim().min(1, 'Write the note').max(5000),
-  followUpOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/).nullable().optional(),
+  followUpOn: z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/)
+    .nullable()
+    .optional(),
 });
 export type NoteInput = z.infer<typeof noteInputSchema>;
 

@@ -16,7 +16,12 @@ export const sugarbushInputSchema = z.object({
   sunnyAzimuthDeg: z.number().min(0).lt(360).default(180),
 });
 export type SugarbushInput = z.input<typeof sugarbushInputSchema>;
-export const sugarbushPatchSchema = sugarbushInputSchema.partial();
+export const sugarbushPatchSchema = z.object({
+  name: sugarbushInputSchema.shape.name.optional(),
+  boundary: boundarySchema.nullable().optional(),
+  profile: z.string().min(1).max(40).optional(),
+  sunnyAzimuthDeg: z.number().min(0).lt(360).optional(),
+});
 
 export interface Sugarbush {
   id: number;

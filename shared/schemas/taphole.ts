@@ -8,7 +8,11 @@ export const tapholeInputSchema = z.object({
   depthCm: z.number().gt(0).max(10),
   bitCm: z.number().gt(0).max(2),
   collection: collectionSchema,
-  drilledOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/).nullable().optional(),
+  drilledOn: z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/)
+    .nullable()
+    .optional(),
   stainHit: z.boolean().nullable().optional(),
 });
 export type TapholeInput = z.infer<typeof tapholeInputSchema>;

@@ -14,7 +14,13 @@ export const treeInputSchema = z.object({
 });
 export type TreeInput = z.input<typeof treeInputSchema>;
 
-export const treePatchSchema = treeInputSchema.partial();
+export const treePatchSchema = z.object({
+  tag: treeInputSchema.shape.tag.optional(),
+  species: speciesSchema.optional(),
+  lat: z.number().min(-90).max(90).nullable().optional(),
+  lng: z.number().min(-180).max(180).nullable().optional(),
+  status: treeStatusSchema.optional(),
+});
 export type TreePatch = z.infer<typeof treePatchSchema>;
 
 /** A tree as the API returns it, with its latest figures for the register. */

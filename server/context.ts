@@ -1,0 +1,10 @@
+import type { Knex } from 'knex';
+import type { Config } from './config';
+import type { Mailer } from './mail/mailer';
+
+/** What every module needs, built once per app. */
+export interface AppContext {
+  db: Knex;
+  config: Config;
+  mailer: Mailer;
+}

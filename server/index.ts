@@ -1,0 +1,34 @@
+import type { Server } from 'node:http';
+import { createApp } from './app';
+import { ConfigError, loadConfig } from './config';
+import { createDb, migrateLatest } from './db';
+
+/** Migrate, then listen. Resolves once the server accepts connections. */
+export async function startServer(env: NodeJS.ProcessEnv = process.env) {
+  const config = loadConfig(env);
+  const db = createDb(config.DATABASE_FILE);
+  await migrateLatest(db);
+  const app = createApp({ config, db });
+  const server = await new Promise<Server>((resolve, reject) => {
+    const s = app.listen(config.PORT, () => resolve(s));
+    s.on('error', reject);
+  });
+  const close = async () => {
+    await new Promise<void>((resolve) => server.close(() => resolve()));
+    await db.destroy();
+  };
+  return { config, db, server, close };
+}
+
+export function exitOnConfigError(err: unknown): never {
+  if (err instanceof ConfigError) {
+    console.error(err.message);
+    process.exit(2);
+  }
+  console.error(err);
+  process.exit(1);
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  startServer().catch(exitOnConfigError);
+}

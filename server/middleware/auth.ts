@@ -1,0 +1,78 @@
+import type { Request, RequestHandler, Response } from 'express';
+import type { Knex } from 'knex';
+import { can, type Permission } from '../../shared/schemas/permissions';
+import type { Role } from '../../shared/schemas/enums';
+import { AppError, forbidden } from '../errors';
+import { membersRepository } from '../modules/members/members.repository';
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface User {
+      id: number;
+      email: string;
+      name: string;
+      unitSystem: 'imperial' | 'metric';
+    }
+  }
+}
+
+export interface Access {
+  sugarbushId: number;
+  role: Role;
+  userId: number;
+}
+
+export const requireAuth: RequestHandler = (req, _res, next) => {
+  if (!req.user) return next(new AppError(401, 'unauthenticated', 'Sign in first'));
+  next();
+};
+
+export const currentUser = (req: Request) => {
+  if (!req.user) throw new AppError(401, 'unauthenticated', 'Sign in first');
+  return req.user;
+};
+
+export const accessOf = (res: Response) => res.locals.access as Access;
+
+const idParam = (raw: unknown, what: string) => {
+  const id = Number(raw);
+  if (!Number.isInteger(id) || id <= 0) throw new AppError(404, 'not-found', `${what} not found`);
+  return id;
+};
+
+/** Member of the sugarbush in `:id`, or 404: a non-member learns nothing of its existence. */
+export function sugarbushAccess(db: Knex, param = 'id'): RequestHandler {
+  const members = membersRepository(db);
+  return async (req, res, next) => {
+    const user = currentUser(req);
+    const sugarbushId = idParam(req.params[param], 'Sugarbush');
+    const role = await members.roleOf(user.id, sugarbushId);
+    if (!role) throw new AppError(404, 'not-found', 'Sugarbush not found');
+    res.locals.access = { sugarbushId, role, userId: user.id } satisfies Access;
+    next();
+  };
+}
+
+/** Member of the sugarbush holding the tree in `:treeId`, or 404 for the tree. */
+export function treeAccess(db: Knex): RequestHandler {
+  const members = membersRepository(db);
+  return async (req, res, next) => {
+    const user = currentUser(req);
+    const treeId = idParam(req.params.treeId, 'Tree');
+    const tree = await db('trees').where({ id: treeId }).first('id', 'sugarbush_id');
+    const role = tree ? await members.roleOf(user.id, tree.sugarbush_id) : null;
+    if (!tree || !role) throw new AppError(404, 'not-found', 'Tree not found');
+    res.locals.access = { sugarbushId: tree.sugarbush_id, role, userId: user.id } satisfies Access;
+    res.locals.treeId = treeId;
+    next();
+  };
+}
+
+/** The member's role must allow the action (CONTRACT role table), else 403. */
+export function requirePermission(action: Permission): RequestHandler {
+  return (_req, res, next) => {
+    if (!can(accessOf(res)?.role, action)) return next(forbidden());
+    next();
+  };
+}

@@ -1,0 +1,40 @@
+import { Router } from 'express';
+import type { AppContext } from '../../context';
+import { accessOf, requirePermission, treeAccess } from '../../middleware/auth';
+import { parsed, validate } from '../../middleware/validate';
+import { listQuerySchema, type ListQuery } from '../../../shared/schemas/list-query';
+import { measurementInputSchema, type MeasurementInput } from '../../../shared/schemas/measurement';
+import { measurementsService } from './measurements.service';
+
+export function measurementsRoutes(ctx: AppContext) {
+  const router = Router();
+  const service = measurementsService(ctx);
+
+  router.get(
+    '/trees/:treeId/measurements',
+    treeAccess(ctx.db),
+    validate({ query: listQuerySchema }),
+    async (_req, res) => {
+      res.json(await service.list(res.locals.treeId, parsed<ListQuery>(res, 'query')));
+    },
+  );
+
+  router.post(
+    '/trees/:treeId/measurements',
+    treeAccess(ctx.db),
+    requirePermission('record-measurements'),
+    validate({ body: measurementInputSchema }),
+    async (_req, res) => {
+      const { sugarbushId, userId } = accessOf(res);
+      const m = await service.record(
+        res.locals.treeId,
+        sugarbushId,
+        userId,
+        parsed<MeasurementInput>(res, 'body'),
+      );
+      res.status(201).json(m);
+    },
+  );
+
+  return router;
+}

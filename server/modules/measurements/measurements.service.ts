@@ -1,0 +1,54 @@
+import type { AppContext } from '../../context';
+import { AppError } from '../../errors';
+import { auditRepository } from '../audit/audit.repository';
+import type { ListQuery, Page } from '../../../shared/schemas/list-query';
+import type { Measurement, MeasurementInput } from '../../../shared/schemas/measurement';
+import { measurementsRepository } from './measurements.repository';
+import { pageOf } from '../../lib/paging';
+
+export function measurementsService(ctx: AppContext) {
+  const repo = measurementsRepository(ctx.db);
+  const audit = auditRepository(ctx.db);
+
+  return {
+    async list(treeId: number, q: ListQuery): Promise<Page<Measurement>> {
+      return pageOf(q, (range) =>
+        repo.listForTree(treeId, { ...range, desc: q.sort === '-measuredOn' }),
+      );
+    },
+
+    /** Records a measurement; a correction appends a row naming the one it replaces. */
+    async record(
+      treeId: number,
+      sugarbushId: number,
+      userId: number,
+      input: MeasurementInput,
+    ): Promise<Measurement> {
+      if (input.correctsId) {
+        const target = await repo.find(input.correctsId);
+        if (!target || target.treeId !== treeId) {
+          throw new AppError(400, 'invalid-input', 'Some fields need attention', {
+            correctsId: 'That measurement does not belong to this tree',
+          });
+        }
+        if (target.superseded) {
+          throw new AppError(
+            409,
+            'already-corrected',
+            'That measurement was already corrected: correct the newer row',
+          );
+        }
+      }
+      const id = await repo.create(treeId, userId, input);
+      await audit.record({
+        sugarbushId,
+        userId,
+        action: input.correctsId ? 'correct' : 'create',
+        entity: 'measurement',
+        entityId: id,
+        detail: input,
+      });
+      return (await repo.find(id))!;
+    },
+  };
+}

@@ -1,0 +1,42 @@
+import { Router } from 'express';
+import type { z } from 'zod';
+import type { AppContext } from '../../context';
+import { accessOf, currentUser, requirePermission, sugarbushAccess } from '../../middleware/auth';
+import { parsed, validate } from '../../middleware/validate';
+import { listQuerySchema, type ListQuery } from '../../../shared/schemas/list-query';
+import { sugarbushInputSchema, sugarbushPatchSchema } from '../../../shared/schemas/sugarbush';
+import { sugarbushesService } from './sugarbushes.service';
+
+export function sugarbushesRoutes(ctx: AppContext) {
+  const router = Router();
+  const service = sugarbushesService(ctx);
+  const member = sugarbushAccess(ctx.db);
+
+  router.get('/sugarbushes', validate({ query: listQuerySchema }), async (req, res) => {
+    res.json(await service.list(currentUser(req).id, parsed<ListQuery>(res, 'query')));
+  });
+
+  router.post('/sugarbushes', validate({ body: sugarbushInputSchema }), async (req, res) => {
+    const body = parsed<z.output<typeof sugarbushInputSchema>>(res, 'body');
+    res.status(201).json(await service.create(currentUser(req).id, body));
+  });
+
+  router.get('/sugarbushes/:id', member, async (_req, res) => {
+    const access = accessOf(res);
+    res.json(await service.get(access.userId, access.sugarbushId));
+  });
+
+  router.patch(
+    '/sugarbushes/:id',
+    member,
+    requirePermission('edit-trees'),
+    validate({ body: sugarbushPatchSchema }),
+    async (_req, res) => {
+      const access = accessOf(res);
+      const body = parsed<z.output<typeof sugarbushPatchSchema>>(res, 'body');
+      res.json(await service.update(access.userId, access.sugarbushId, body));
+    },
+  );
+
+  return router;
+}

@@ -1,0 +1,78 @@
+import { pageOf } from '../../lib/paging';
+import type { AppContext } from '../../context';
+import { AppError } from '../../errors';
+import { auditRepository } from '../audit/audit.repository';
+import { membersRepository } from '../members/members.repository';
+import type { ListQuery, Page } from '../../../shared/schemas/list-query';
+import type { Sugarbush } from '../../../shared/schemas/sugarbush';
+import { sugarbushesRepository } from './sugarbushes.repository';
+import type { z } from 'zod';
+import type { sugarbushInputSchema, sugarbushPatchSchema } from '../../../shared/schemas/sugarbush';
+
+export function sugarbushesService(ctx: AppContext) {
+  const repo = sugarbushesRepository(ctx.db);
+  const members = membersRepository(ctx.db);
+  const audit = auditRepository(ctx.db);
+
+  return {
+    async list(userId: number, q: ListQuery): Promise<Page<Sugarbush>> {
+      return pageOf(q, (range) => repo.listFor(userId, { ...range, q: q.q }));
+    },
+
+    async get(userId: number, id: number): Promise<Sugarbush> {
+      const s = await repo.findFor(userId, id);
+      if (!s) throw new AppError(404, 'not-found', 'Sugarbush not found');
+      return s;
+    },
+
+    /** Whoever creates a sugarbush becomes its owner. */
+    async create(userId: number, input: z.output<typeof sugarbushInputSchema>): Promise<Sugarbush> {
+      const id = await ctx.db.transaction(async (trx) => {
+        const newId = await sugarbushesRepository(trx).create({
+          name: input.name,
+          boundary: input.boundary ?? null,
+          profile: input.profile,
+          sunnyAzimuthDeg: input.sunnyAzimuthDeg,
+        });
+        await membersRepository(trx).add(userId, newId, 'owner');
+        return newId;
+      });
+      await audit.record({
+        sugarbushId: id,
+        userId,
+        action: 'create',
+        entity: 'sugarbush',
+        entityId: id,
+      });
+      return this.get(userId, id);
+    },
+
+    async update(
+      userId: number,
+      id: number,
+      patch: z.output<typeof sugarbushPatchSchema>,
+    ): Promise<Sugarbush> {
+      const role = await members.roleOf(userId, id);
+      const touchesProfile = patch.profile !== undefined || patch.sunnyAzimuthDeg !== undefined;
+      if (touchesProfile && role !== 'owner') {
+        throw new AppError(403, 'forbidden', 'Only the owner may change the guideline profile');
+      }
+      const row: Record<string, unknown> = {};
+      if (patch.name !== undefined) row.name = patch.name;
+      if (patch.boundary !== undefined)
+        row.boundary = patch.boundary ? JSON.stringify(patch.boundary) : null;
+      if (patch.profile !== undefined) row.profile = patch.profile;
+      if (patch.sunnyAzimuthDeg !== undefined) row.sunny_azimuth_deg = patch.sunnyAzimuthDeg;
+      if (Object.keys(row).length > 0) await repo.update(id, row);
+      await audit.record({
+        sugarbushId: id,
+        userId,
+        action: 'update',
+        entity: 'sugarbush',
+        entityId: id,
+        detail: Object.keys(row),
+      });
+      return this.get(userId, id);
+    },
+  };
+}

@@ -1,0 +1,46 @@
+import { Router } from 'express';
+import type { AppContext } from '../../context';
+import { pageOf } from '../../lib/paging';
+import { accessOf, requirePermission, treeAccess } from '../../middleware/auth';
+import { parsed, validate } from '../../middleware/validate';
+import { auditRepository } from '../audit/audit.repository';
+import { listQuerySchema, type ListQuery } from '../../../shared/schemas/list-query';
+import { tapholeInputSchema, type TapholeInput } from '../../../shared/schemas/taphole';
+import { tapholesRepository } from './tapholes.repository';
+
+export function tapholesRoutes(ctx: AppContext) {
+  const router = Router();
+  const repo = tapholesRepository(ctx.db);
+  const audit = auditRepository(ctx.db);
+
+  router.get(
+    '/trees/:treeId/tapholes',
+    treeAccess(ctx.db),
+    validate({ query: listQuerySchema }),
+    async (_req, res) => {
+      const q = parsed<ListQuery>(res, 'query');
+      res.json(await pageOf(q, (range) => repo.listForTree(res.locals.treeId, range)));
+    },
+  );
+
+  router.post(
+    '/trees/:treeId/tapholes',
+    treeAccess(ctx.db),
+    requirePermission('record-tapholes'),
+    validate({ body: tapholeInputSchema }),
+    async (_req, res) => {
+      const { sugarbushId, userId } = accessOf(res);
+      const hole = await repo.create(res.locals.treeId, userId, parsed<TapholeInput>(res, 'body'));
+      await audit.record({
+        sugarbushId,
+        userId,
+        action: 'create',
+        entity: 'taphole',
+        entityId: hole.id,
+      });
+      res.status(201).json(hole);
+    },
+  );
+
+  return router;
+}

@@ -1,0 +1,119 @@
+import type { Knex } from 'knex';
+import type { Tree } from '../../../shared/schemas/tree';
+
+interface Row {
+  id: number;
+  sugarbush_id: number;
+  tag: string;
+  species: Tree['species'];
+  lat: number | null;
+  lng: number | null;
+  status: Tree['status'];
+  dbh_cm: number | null;
+  measured_on: string | null;
+  crown_dieback_pct: number | null;
+}
+
+const toTree = (r: Row): Tree => ({
+  id: r.id,
+  sugarbushId: r.sugarbush_id,
+  tag: r.tag,
+  species: r.species,
+  lat: r.lat,
+  lng: r.lng,
+  status: r.status,
+  latestDbhCm: r.dbh_cm,
+  latestMeasuredOn: r.measured_on,
+  latestCrownDiebackPct: r.crown_dieback_pct,
+});
+
+/** Each tree's newest measurement that no later row corrects. */
+const latestMeasurements = (db: Knex) =>
+  db
+    .select(
+      'm.tree_id',
+      'm.dbh_cm',
+      'm.measured_on',
+      'm.crown_dieback_pct',
+      db.raw(
+        'row_number() over (partition by m.tree_id order by m.measured_on desc, m.id desc) as rn',
+      ),
+    )
+    .from('measurements as m')
+    .whereNotExists(db('measurements as c').select(db.raw('1')).whereRaw('c.corrects_id = m.id'));
+
+const sortColumns: Record<string, string> = {
+  tag: 't.tag',
+  dbh: 'l.dbh_cm',
+  status: 't.status',
+  species: 't.species',
+};
+
+export interface TreeFilters {
+  q?: string;
+  status?: string;
+  species?: string;
+  sort?: string;
+  offset: number;
+  limit: number;
+}
+
+export function treesRepository(db: Knex) {
+  const base = () =>
+    db
+      .with('latest', latestMeasurements(db))
+      .from('trees as t')
+      .leftJoin('latest as l', function () {
+        this.on('l.tree_id', 't.id').andOn('l.rn', db.raw('1'));
+      });
+  const columns = ['t.*', 'l.dbh_cm', 'l.measured_on', 'l.crown_dieback_pct'];
+
+  return {
+    async list(sugarbushId: number, f: TreeFilters) {
+      const q = base()
+        .where('t.sugarbush_id', sugarbushId)
+        .modify((qb) => {
+          if (f.q) qb.whereLike('t.tag', `%${f.q}%`);
+          if (f.status) qb.where('t.status', f.status);
+          if (f.species) qb.where('t.species', f.species);
+        });
+      const [{ n }] = await q.clone().count({ n: '*' });
+      const desc = f.sort?.startsWith('-') ?? false;
+      const column = sortColumns[(f.sort ?? 'tag').replace(/^-/, '')] ?? 't.tag';
+      const rows: Row[] = await q
+        .select(columns)
+        .orderByRaw(`${column} is null`)
+        .orderBy(column, desc ? 'desc' : 'asc')
+        .orderBy('t.tag', 'asc')
+        .offset(f.offset)
+        .limit(f.limit);
+      return { items: rows.map(toTree), total: Number(n) };
+    },
+    async find(id: number) {
+      const row: Row | undefined = await base().where('t.id', id).first(columns);
+      return row ? toTree(row) : undefined;
+    },
+    findByTag: (sugarbushId: number, tag: string) =>
+      db('trees').where({ sugarbush_id: sugarbushId, tag }).first('id'),
+    async create(
+      sugarbushId: number,
+      t: { tag: string; species: string; lat?: number | null; lng?: number | null; status: string },
+    ) {
+      const [row] = await db('trees')
+        .insert({
+          sugarbush_id: sugarbushId,
+          tag: t.tag,
+          species: t.species,
+          lat: t.lat ?? null,
+          lng: t.lng ?? null,
+          status: t.status,
+        })
+        .returning('id');
+      return typeof row === 'object' ? (row.id as number) : (row as number);
+    },
+    update: (id: number, patch: Record<string, unknown>) =>
+      db('trees')
+        .where({ id })
+        .update({ ...patch, updated_at: db.fn.now() }),
+  };
+}

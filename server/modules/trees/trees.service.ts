@@ -1,0 +1,89 @@
+import { pageOf } from '../../lib/paging';
+import type { AppContext } from '../../context';
+import { AppError } from '../../errors';
+import { auditRepository } from '../audit/audit.repository';
+import type { Page } from '../../../shared/schemas/list-query';
+import type { Tree, TreePatch } from '../../../shared/schemas/tree';
+import type { TreeListQuery } from './trees.routes';
+import { treesRepository } from './trees.repository';
+import type { z } from 'zod';
+import type { treeInputSchema } from '../../../shared/schemas/tree';
+
+const duplicateTag = (tag: string) =>
+  new AppError(409, 'duplicate-tag', `Tag ${tag} is already used in this sugarbush`, {
+    tag: `Tag ${tag} is already used in this sugarbush`,
+  });
+
+const isUniqueViolation = (err: unknown) =>
+  (err as { code?: string }).code === 'SQLITE_CONSTRAINT_UNIQUE';
+
+export function treesService(ctx: AppContext) {
+  const repo = treesRepository(ctx.db);
+  const audit = auditRepository(ctx.db);
+
+  return {
+    async list(sugarbushId: number, q: TreeListQuery): Promise<Page<Tree>> {
+      return pageOf(q, (range) => repo.list(sugarbushId, { ...q, ...range }));
+    },
+
+    async get(treeId: number): Promise<Tree> {
+      const tree = await repo.find(treeId);
+      if (!tree) throw new AppError(404, 'not-found', 'Tree not found');
+      return tree;
+    },
+
+    async create(
+      sugarbushId: number,
+      userId: number,
+      input: z.output<typeof treeInputSchema>,
+    ): Promise<Tree> {
+      if (await repo.findByTag(sugarbushId, input.tag)) throw duplicateTag(input.tag);
+      let id: number;
+      try {
+        id = await repo.create(sugarbushId, input);
+      } catch (err) {
+        if (isUniqueViolation(err)) throw duplicateTag(input.tag);
+        throw err;
+      }
+      await audit.record({
+        sugarbushId,
+        userId,
+        action: 'create',
+        entity: 'tree',
+        entityId: id,
+        detail: input,
+      });
+      return this.get(id);
+    },
+
+    async update(
+      treeId: number,
+      sugarbushId: number,
+      userId: number,
+      patch: TreePatch,
+    ): Promise<Tree> {
+      if (patch.tag !== undefined) {
+        const other = await repo.findByTag(sugarbushId, patch.tag);
+        if (other && other.id !== treeId) throw duplicateTag(patch.tag);
+      }
+      const row = Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined));
+      if (Object.keys(row).length > 0) {
+        try {
+          await repo.update(treeId, row);
+        } catch (err) {
+          if (isUniqueViolation(err)) throw duplicateTag(String(patch.tag));
+          throw err;
+        }
+      }
+      await audit.record({
+        sugarbushId,
+        userId,
+        action: 'update',
+        entity: 'tree',
+        entityId: treeId,
+        detail: row,
+      });
+      return this.get(treeId);
+    },
+  };
+}

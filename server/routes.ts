@@ -1,0 +1,22 @@
+import { Router } from 'express';
+import type { AppContext } from './context';
+import { requireAuth } from './middleware/auth';
+import { devRoutes } from './modules/dev/dev.routes';
+import { measurementsRoutes } from './modules/measurements/measurements.routes';
+import { notesRoutes } from './modules/notes/notes.routes';
+import { sugarbushesRoutes } from './modules/sugarbushes/sugarbushes.routes';
+import { tapholesRoutes } from './modules/tapholes/tapholes.routes';
+import { treesRoutes } from './modules/trees/trees.routes';
+
+/** Every API route behind sign-in (the auth routes are mounted before this). */
+export function apiRoutes(ctx: AppContext) {
+  const router = Router();
+  router.use(devRoutes(ctx));
+  router.use(requireAuth);
+  router.use(sugarbushesRoutes(ctx));
+  router.use(treesRoutes(ctx));
+  router.use(measurementsRoutes(ctx));
+  router.use(tapholesRoutes(ctx));
+  router.use(notesRoutes(ctx));
+  return router;
+}

@@ -1,0 +1,154 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Role } from '../../shared/schemas/enums';
+import { makeTestApp, signIn, standWithTeam } from './test-app';
+
+type Who = Role | 'outsider';
+interface RouteCase {
+  name: string;
+  method: 'get' | 'post' | 'patch';
+  path: (ids: { standId: number; treeId: number }) => string;
+  body?: () => Record<string, unknown>;
+  /** Who may; every other member gets 403, the outsider 404. */
+  allowed: Role[];
+}
+
+const everyone: Role[] = ['owner', 'forester', 'tapper', 'consultant'];
+let n = 0;
+const cases: RouteCase[] = [
+  {
+    name: 'read the stand',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}`,
+    allowed: everyone,
+  },
+  {
+    name: 'rename the stand',
+    method: 'patch',
+    path: (i) => `/api/sugarbushes/${i.standId}`,
+    body: () => ({ name: 'Renamed Ridge' }),
+    allowed: ['owner', 'forester'],
+  },
+  {
+    name: 'change the guideline profile',
+    method: 'patch',
+    path: (i) => `/api/sugarbushes/${i.standId}`,
+    body: () => ({ profile: 'traditional' }),
+    allowed: ['owner'],
+  },
+  {
+    name: 'list trees',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/trees`,
+    allowed: everyone,
+  },
+  {
+    name: 'add a tree',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/trees`,
+    body: () => ({ tag: `N-${++n}`, species: 'red-maple' }),
+    allowed: ['owner', 'forester'],
+  },
+  { name: 'read a tree', method: 'get', path: (i) => `/api/trees/${i.treeId}`, allowed: everyone },
+  {
+    name: 'edit a tree',
+    method: 'patch',
+    path: (i) => `/api/trees/${i.treeId}`,
+    body: () => ({ species: 'sugar-maple' }),
+    allowed: ['owner', 'forester'],
+  },
+  {
+    name: 'list measurements',
+    method: 'get',
+    path: (i) => `/api/trees/${i.treeId}/measurements`,
+    allowed: everyone,
+  },
+  {
+    name: 'record a measurement',
+    method: 'post',
+    path: (i) => `/api/trees/${i.treeId}/measurements`,
+    body: () => ({ measuredOn: '2026-10-02', dbhCm: 41.2, crownDiebackPct: 5 }),
+    allowed: ['owner', 'forester'],
+  },
+  {
+    name: 'list tapholes',
+    method: 'get',
+    path: (i) => `/api/trees/${i.treeId}/tapholes`,
+    allowed: everyone,
+  },
+  {
+    name: 'record a taphole',
+    method: 'post',
+    path: (i) => `/api/trees/${i.treeId}/tapholes`,
+    body: () => ({
+      season: 2026,
+      heightCm: 110,
+      azimuthDeg: 180,
+      depthCm: 5.08,
+      bitCm: 0.79,
+      collection: 'vacuum',
+    }),
+    allowed: ['owner', 'tapper'],
+  },
+  {
+    name: 'list tree notes',
+    method: 'get',
+    path: (i) => `/api/trees/${i.treeId}/notes`,
+    allowed: everyone,
+  },
+  {
+    name: 'list stand notes',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/notes`,
+    allowed: everyone,
+  },
+  {
+    name: 'write a note',
+    method: 'post',
+    path: (i) => `/api/trees/${i.treeId}/notes`,
+    body: () => ({ category: 'finding', body: 'Frost crack on the north face.' }),
+    allowed: ['owner', 'consultant'],
+  },
+];
+
+let t: Awaited<ReturnType<typeof makeTestApp>>;
+let ids: { standId: number; treeId: number };
+const agents = {} as Record<Who, Awaited<ReturnType<typeof signIn>>>;
+
+beforeAll(async () => {
+  t = await makeTestApp();
+  const team = await standWithTeam(t.db);
+  ids = { standId: team.standId, treeId: team.treeId };
+  for (const who of [...everyone, 'outsider'] as Who[])
+    agents[who] = await signIn(t.app, team.users[who]);
+});
+afterAll(() => t.close());
+
+describe.each(cases)('$name', (c) => {
+  it.each([...everyone, 'outsider'] as Who[])('as %s', async (who) => {
+    const { agent, csrf } = agents[who];
+    let req = agent[c.method](c.path(ids));
+    if (c.method !== 'get') req = req.set('x-csrf-token', csrf).send(c.body!());
+    const res = await req;
+    const expected =
+      who === 'outsider' ? 404 : c.allowed.includes(who) ? (c.method === 'post' ? 201 : 200) : 403;
+    expect(res.status, JSON.stringify(res.body)).toBe(expected);
+    if (expected >= 400)
+      expect(res.body.error.code).toBe(expected === 404 ? 'not-found' : 'forbidden');
+  });
+});
+
+describe('what a member sees', () => {
+  it('when the outsider lists sugarbushes, then only their own stand appears', async () => {
+    const res = await agents.outsider.agent.get('/api/sugarbushes');
+    expect(res.body.items.map((s: { name: string }) => s.name)).toEqual(['Other Hollow']);
+    expect(res.body.total).toBe(1);
+  });
+
+  it('when the outsider asks for a stand that does not exist, then it looks the same as one they may not see', async () => {
+    const hidden = await agents.outsider.agent.get(`/api/sugarbushes/${ids.standId}`);
+    const missing = await agents.outsider.agent.get('/api/sugarbushes/999999');
+    expect([hidden.status, missing.status]).toEqual([404, 404]);
+    expect(hidden.body).toEqual({ error: { code: 'not-found', message: 'Sugarbush not found' } });
+    expect(missing.body).toEqual(hidden.body);
+  });
+});

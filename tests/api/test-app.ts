@@ -1,0 +1,96 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import type { Knex } from 'knex';
+import { createApp } from '../../server/app';
+import { loadConfig } from '../../server/config';
+import { createDb, migrateLatest } from '../../server/db';
+import { hashPassword } from '../../server/modules/auth/password';
+import type { Role } from '../../shared/schemas/enums';
+
+export const PASSWORD = 'correct-horse-battery';
+
+/** A real app on a fresh temporary SQLite file, migrated. */
+export async function makeTestApp(env: Record<string, string> = {}, file?: string) {
+  const dbFile =
+    file ?? path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'clearwood-test-')), 'test.sqlite');
+  const config = loadConfig({
+    NODE_ENV: 'test',
+    DATABASE_FILE: dbFile,
+    LOGIN_RATE_LIMIT: '1000',
+    SESSION_SECRET: 'a-test-secret-of-enough-length',
+    ...env,
+  });
+  const db = createDb(dbFile);
+  await migrateLatest(db);
+  const app = createApp({ config, db, clientDir: null, log: () => undefined });
+  return { app, db, config, dbFile, close: () => db.destroy() };
+}
+
+let hashed: string | undefined;
+
+export async function addUser(db: Knex, email: string, name = email.split('@')[0]) {
+  hashed ??= await hashPassword(PASSWORD);
+  const [row] = await db('users').insert({ email, name, password_hash: hashed }).returning('id');
+  return row.id as number;
+}
+
+export async function addSugarbush(db: Knex, name: string) {
+  const [row] = await db('sugarbushes').insert({ name }).returning('id');
+  return row.id as number;
+}
+
+export async function addMember(db: Knex, userId: number, sugarbushId: number, role: Role) {
+  await db('memberships').insert({ user_id: userId, sugarbush_id: sugarbushId, role });
+}
+
+export async function addTree(
+  db: Knex,
+  sugarbushId: number,
+  tag: string,
+  extra: Record<string, unknown> = {},
+) {
+  const [row] = await db('trees')
+    .insert({ sugarbush_id: sugarbushId, tag, species: 'sugar-maple', status: 'active', ...extra })
+    .returning('id');
+  return row.id as number;
+}
+
+/** One stand with a member of every role, one tree, and an outsider who owns a second stand. */
+export async function standWithTeam(db: Knex) {
+  const standId = await addSugarbush(db, 'Test Ridge');
+  const otherStandId = await addSugarbush(db, 'Other Hollow');
+  const users: Record<Role | 'outsider', string> = {
+    owner: 'owner@test.example',
+    forester: 'forester@test.example',
+    tapper: 'tapper@test.example',
+    consultant: 'consultant@test.example',
+    outsider: 'outsider@test.example',
+  };
+  for (const role of ['owner', 'forester', 'tapper', 'consultant'] as const) {
+    await addMember(db, await addUser(db, users[role]), standId, role);
+  }
+  await addMember(db, await addUser(db, users.outsider), otherStandId, 'owner');
+  const treeId = await addTree(db, standId, 'T-001');
+  const otherTreeId = await addTree(db, otherStandId, 'X-001');
+  return { standId, otherStandId, treeId, otherTreeId, users };
+}
+
+/** A signed-in agent and a CSRF token valid for its (regenerated) session. */
+export async function signIn(
+  app: Parameters<typeof request.agent>[0],
+  email: string,
+  password = PASSWORD,
+) {
+  const agent = request.agent(app);
+  const first = await agent.get('/api/auth/csrf');
+  const res = await agent
+    .post('/api/auth/login')
+    .set('x-csrf-token', first.body.token)
+    .send({ email, password });
+  if (res.status !== 200)
+    throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  const { body } = await agent.get('/api/auth/csrf');
+  return { agent, csrf: body.token as string, me: res.body };
+}
