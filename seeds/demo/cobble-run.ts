@@ -1,0 +1,37 @@
+import type { Species } from '../../shared/schemas/enums';
+import { polygonGeoJson } from './geo';
+import type { Rng } from './random';
+import { ordinaryStand, type StandLayout } from './stand';
+import type { TreeSpec } from './types';
+
+/** A small bucket stand of another owner, a few seasons on record. */
+export const COBBLE_RUN: StandLayout = {
+  key: 'cobble-run',
+  tagPrefix: 'CR',
+  tagDigits: 3,
+  // Invented, some way from Owl Ledge; nothing here describes a real property.
+  origin: { lat: 44.2391, lng: -72.5127 },
+  ring: [
+    [-70, -45],
+    [15, -60],
+    [75, -30],
+    [65, 40],
+    [-5, 55],
+    [-65, 25],
+  ],
+  gaps: [],
+  treeCount: 25,
+  clusterCount: 3,
+  clusterSd: 18,
+  clusteredShare: 0.6,
+  minSpacingM: 5,
+  bandM: 30,
+  firstSeason: 2023,
+  lastSeason: 2026,
+  speciesAt: (_xy, rng: Rng): Species => (rng.chance(0.88) ? 'sugar-maple' : 'red-maple'),
+  collectionAt: () => 'bucket',
+};
+
+export const COBBLE_RUN_BOUNDARY = polygonGeoJson(COBBLE_RUN.origin, COBBLE_RUN.ring);
+
+export const cobbleRunSpecs = (): TreeSpec[] => ordinaryStand(COBBLE_RUN);
