@@ -4,7 +4,8 @@ const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' |
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
-  PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  /** 0 picks a free port (tests). */
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   DATABASE_FILE: z.string().min(1).default('data/clearwood.sqlite'),
   SESSION_SECRET: z.string().min(16).default('clearwood-local-session-secret-change-me'),
   /** Send cookies only over HTTPS; off for plain-http local runs. */

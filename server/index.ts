@@ -13,11 +13,14 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
     const s = app.listen(config.PORT, () => resolve(s));
     s.on('error', reject);
   });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : config.PORT;
+  const url = `http://localhost:${port}`;
   const close = async () => {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await db.destroy();
   };
-  return { config, db, server, close };
+  return { config, db, server, url, close };
 }
 
 export function exitOnConfigError(err: unknown): never {

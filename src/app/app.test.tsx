@@ -1,0 +1,90 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { createMemoryRouter, RouterProvider } from 'react-router';
+import type { Role } from '@shared/schemas/enums';
+import { json, mockApi } from '@/test/api-mock';
+import { meAs, page, sugarbush, tree } from '@/test/fixtures';
+import { createRoutes } from './router';
+
+function openApp(url: string, me: unknown) {
+  const api = mockApi({
+    // Nobody signed in: the API answers 401 for /me.
+    'GET /api/auth/me':
+      me ?? json(401, { error: { code: 'unauthenticated', message: 'Sign in first' } }),
+    'GET /api/sugarbushes': page([
+      sugarbush({ role: 'tapper' }),
+      sugarbush({ id: 8, name: 'Upper Lot', role: 'owner', treeCount: 40 }),
+    ]),
+    'GET /api/sugarbushes/3': sugarbush(),
+    'GET /api/sugarbushes/3/trees': page([tree()]),
+  });
+  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  const router = createMemoryRouter(createRoutes(queryClient), { initialEntries: [url] });
+  render(
+    <QueryClientProvider client={queryClient}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>,
+  );
+  return { api, router, user: userEvent.setup() };
+}
+
+const asRole = (role: Role) => ({
+  ...meAs(role),
+  memberships: [
+    { sugarbushId: 3, role },
+    { sugarbushId: 8, role: 'owner' as const },
+  ],
+});
+
+describe('the app shell', () => {
+  it('when nobody is signed in, then an app page sends them to sign-in and remembers where they were going', async () => {
+    const { router } = openApp('/sugarbushes/3/trees?sort=-dbh', null);
+    await waitFor(() => expect(router.state.location.pathname).toBe('/sign-in'));
+    expect(new URLSearchParams(router.state.location.search).get('next')).toBe(
+      '/sugarbushes/3/trees?sort=-dbh',
+    );
+    expect(await screen.findByRole('button', { name: 'Sign in' })).toBeInTheDocument();
+  });
+
+  it("when a signed-in user opens /, then they land on their first sugarbush's trees", async () => {
+    const { router } = openApp('/', asRole('tapper'));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/sugarbushes/3/trees'));
+    expect(await screen.findByRole('table', { name: 'Tree register' })).toBeInTheDocument();
+  });
+
+  it('when a tapper signs in, then the rail shows the sections a tapper uses and the phone bar has at most five items', async () => {
+    openApp('/sugarbushes/3/trees', asRole('tapper'));
+    const [rail, bar] = await screen.findAllByRole('navigation', { name: 'Sections' });
+    const names = within(rail)
+      .getAllByRole('link')
+      .map((l) => l.textContent);
+    expect(names).toEqual(['Trees', 'Map', 'Season plan', 'Overview', 'Notes', 'Season log']);
+    expect(within(rail).getByRole('link', { name: 'Trees' })).toHaveAttribute(
+      'aria-current',
+      'page',
+    );
+    expect(
+      within(bar).getAllByRole('link').length + within(bar).getAllByRole('button').length,
+    ).toBeLessThanOrEqual(5);
+    expect(screen.getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
+  });
+
+  it("lists the user's sugarbushes with their role, and switching keeps the section", async () => {
+    const { router, user } = openApp('/sugarbushes/3/map', asRole('forester'));
+    const switcher = await screen.findByLabelText('Sugarbush');
+    expect(
+      within(switcher)
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(['Hollow Creek — Tapper', 'Upper Lot — Owner']);
+    await user.selectOptions(switcher, '8');
+    await waitFor(() => expect(router.state.location.pathname).toBe('/sugarbushes/8/map'));
+  });
+
+  it('when a section is not built yet, then it says so calmly', async () => {
+    openApp('/sugarbushes/3/plan', asRole('consultant'));
+    expect(await screen.findByRole('heading', { name: 'Season plan' })).toBeInTheDocument();
+    expect(screen.getByText('Coming soon in Clearwood')).toBeInTheDocument();
+  });
+});

@@ -1,0 +1,74 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, type RouteObject } from 'react-router';
+import { paths, type SectionKey } from '@/config/paths';
+import { AppLoading } from './app-loading';
+import { requireMe } from './loaders';
+import { RouteError } from './route-error';
+import { AppShell } from './shell/app-shell';
+import type { SectionHandle } from './shell/sections';
+
+const planned: SectionKey[] = ['map', 'round', 'plan', 'overview', 'notes', 'season', 'settings'];
+
+const handle = (section: SectionKey): SectionHandle => ({ section });
+
+/** Every page is its own lazily loaded module; loaders that need the cache get it here. */
+export function createRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.signIn.path,
+      hydrateFallbackElement: <AppLoading />,
+      errorElement: <RouteError />,
+      lazy: async () => {
+        const { SignInRoute, signInLoader } = await import('./routes/sign-in');
+        return { Component: SignInRoute, loader: signInLoader(queryClient) };
+      },
+    },
+    {
+      id: 'app',
+      Component: AppShell,
+      loader: ({ request }) => requireMe(queryClient, request),
+      hydrateFallbackElement: <AppLoading />,
+      errorElement: <RouteError />,
+      children: [
+        {
+          errorElement: <RouteError />,
+          children: [
+            {
+              index: true,
+              lazy: async () => {
+                const { HomeRoute, homeLoader } = await import('./routes/home');
+                return { Component: HomeRoute, loader: homeLoader(queryClient) };
+              },
+            },
+            {
+              path: paths.trees.path,
+              handle: handle('trees'),
+              lazy: async () => ({
+                Component: (await import('./routes/tree-register')).TreeRegisterRoute,
+              }),
+            },
+            {
+              path: paths.tree.path,
+              handle: handle('trees'),
+              lazy: async () => ({ Component: (await import('./routes/tree')).TreeRoute }),
+            },
+            ...planned.map((section) => ({
+              path: paths[section].path,
+              handle: handle(section),
+              lazy: async () => ({
+                Component: (await import('./routes/coming-soon')).ComingSoonRoute,
+              }),
+            })),
+            {
+              path: '*',
+              lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
+            },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export const createAppRouter = (queryClient: QueryClient) =>
+  createBrowserRouter(createRoutes(queryClient));

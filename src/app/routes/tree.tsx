@@ -1,0 +1,72 @@
+import { Link, useParams } from 'react-router';
+import { EmptyState } from '@/components/ui/empty-state';
+import { ErrorState } from '@/components/ui/error-state';
+import { Skeleton } from '@/components/ui/skeleton';
+import { paths } from '@/config/paths';
+import { DiameterHistory } from '@/features/measurements/components/diameter-history';
+import { MeasurementForm } from '@/features/measurements/components/measurement-form';
+import { TapholeList } from '@/features/tapholes/components/taphole-list';
+import { useTree } from '@/features/trees/api/get-tree';
+import { AdviceSlot } from '@/features/trees/components/advice-slot';
+import { TappingCaution } from '@/features/trees/components/tapping-caution';
+import { TreeHeader } from '@/features/trees/components/tree-header';
+import { isApiError } from '@/lib/api-client';
+import { can, useRole } from '@/lib/auth';
+
+export function TreeRoute() {
+  const { treeId: param } = useParams();
+  const treeId = Number(param);
+  const valid = Number.isInteger(treeId) && treeId > 0;
+  const tree = useTree(valid ? treeId : undefined);
+  const role = useRole(tree.data?.sugarbushId);
+
+  if (!valid || (tree.isError && isApiError(tree.error) && tree.error.status === 404)) {
+    return (
+      <EmptyState title="We couldn't find this tree">
+        It may have been removed, or it belongs to a sugarbush you are not part of.{' '}
+        <Link to={paths.home.href()} className="underline underline-offset-4">
+          Back to your trees
+        </Link>
+      </EmptyState>
+    );
+  }
+  if (tree.isError) {
+    return (
+      <ErrorState
+        title="We couldn't load this tree."
+        error={tree.error}
+        onRetry={() => void tree.refetch()}
+      />
+    );
+  }
+  if (tree.isPending) {
+    return (
+      <div role="status" aria-label="Loading tree" className="flex flex-col gap-4">
+        <Skeleton className="h-10 w-1/3" />
+        <Skeleton className="h-16 w-full" />
+        <Skeleton className="h-64 w-full" />
+      </div>
+    );
+  }
+
+  const canRecord = can(role, 'record-measurements');
+  return (
+    <>
+      <title>{`Tree ${tree.data.tag} · Clearwood`}</title>
+      <TreeHeader tree={tree.data} />
+      <div className="grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        {/* On a phone the work comes first: the advice, then the form; the record follows. */}
+        <div className="flex min-w-0 flex-col gap-6 lg:order-2">
+          {/* The advisor's answer for the coming season goes here. */}
+          <AdviceSlot />
+          {canRecord && <MeasurementForm treeId={treeId} />}
+          <TappingCaution />
+        </div>
+        <div className="flex min-w-0 flex-col gap-8 lg:order-1">
+          <DiameterHistory treeId={treeId} canRecord={canRecord} />
+          <TapholeList treeId={treeId} />
+        </div>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,35 @@
+import { Navigate, Outlet, useLocation } from 'react-router';
+import { paths } from '@/config/paths';
+import { useMe, useRole } from '@/lib/auth';
+import { BottomBar } from './bottom-bar';
+import { useCurrentSection, useCurrentSugarbushId } from './current-sugarbush';
+import { SideRail } from './side-rail';
+
+/** Every signed-in page: the rail (desktop) or bottom bar (phone) around one column of content. */
+export function AppShell() {
+  const { data: me } = useMe();
+  const location = useLocation();
+  const sugarbushId = useCurrentSugarbushId();
+  const role = useRole(sugarbushId);
+  const section = useCurrentSection();
+
+  // The session ended while the app was open: sign in again, then come back here.
+  if (!me) return <Navigate to={paths.signIn.href(location.pathname + location.search)} replace />;
+
+  const nav = { user: me.user, sugarbushId, role, section };
+  return (
+    <div className="min-h-screen md:flex">
+      <a
+        href="#main"
+        className="sr-only z-40 rounded bg-ink px-3 py-2 text-paper focus:not-sr-only focus:fixed focus:left-2 focus:top-2"
+      >
+        Skip to content
+      </a>
+      <SideRail {...nav} />
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 pb-28 pt-6 md:px-8 md:pb-12">
+        <Outlet />
+      </main>
+      <BottomBar {...nav} />
+    </div>
+  );
+}

@@ -1,0 +1,57 @@
+/**
+ * Every client route in one place. `path` is the router pattern; `href` builds a link.
+ * Nothing else in the client writes a URL by hand.
+ */
+
+type Id = number | string;
+
+export type SearchInit = Record<string, string | number | undefined | null>;
+
+function withSearch(pathname: string, search?: SearchInit): string {
+  if (!search) return pathname;
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(search)) {
+    if (value !== undefined && value !== null && value !== '') params.set(key, String(value));
+  }
+  const query = params.toString();
+  return query ? `${pathname}?${query}` : pathname;
+}
+
+const sugarbushSection = (segment: string) => ({
+  path: `/sugarbushes/:id/${segment}`,
+  href: (id: Id, search?: SearchInit) =>
+    withSearch(`/sugarbushes/${encodeURIComponent(String(id))}/${segment}`, search),
+});
+
+export const paths = {
+  home: { path: '/', href: () => '/' },
+  signIn: {
+    path: '/sign-in',
+    href: (next?: string) =>
+      withSearch('/sign-in', { next: next && next !== '/' ? next : undefined }),
+  },
+  trees: sugarbushSection('trees'),
+  tree: {
+    path: '/trees/:treeId',
+    href: (treeId: Id) => `/trees/${encodeURIComponent(String(treeId))}`,
+  },
+  map: sugarbushSection('map'),
+  round: sugarbushSection('round'),
+  plan: sugarbushSection('plan'),
+  overview: sugarbushSection('overview'),
+  notes: sugarbushSection('notes'),
+  season: sugarbushSection('season'),
+  settings: sugarbushSection('settings'),
+} as const;
+
+/** The sections that live under one sugarbush, in the order the navigation shows them. */
+export type SectionKey =
+  'trees' | 'map' | 'round' | 'plan' | 'overview' | 'notes' | 'season' | 'settings';
+
+/** A `?next=` value is only honoured when it is a path inside this app. */
+export function safeNext(next: string | null | undefined): string | undefined {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\'))
+    return undefined;
+  if (next.startsWith(paths.signIn.path)) return undefined;
+  return next;
+}

@@ -1,0 +1,7 @@
+export const sugarbushKeys = {
+  all: ['sugarbushes'] as const,
+  lists: () => [...sugarbushKeys.all, 'list'] as const,
+  list: () => [...sugarbushKeys.lists()] as const,
+  details: () => [...sugarbushKeys.all, 'detail'] as const,
+  detail: (id: number) => [...sugarbushKeys.details(), id] as const,
+};

@@ -1,0 +1,70 @@
+import type { Collection } from '@shared/schemas/enums';
+import type { Taphole } from '@shared/schemas/taphole';
+import { DataTable, type Column } from '@/components/ui/data-table';
+import { EmptyState } from '@/components/ui/empty-state';
+import { ErrorState } from '@/components/ui/error-state';
+import { TableSkeleton } from '@/components/ui/skeleton';
+import { formatBit, formatLength, useUnitSystem, type LengthUnit } from '@/lib/units';
+import { useTapholes } from '../api/get-tapholes';
+
+const collectionLabels: Record<Collection, string> = {
+  bucket: 'Bucket',
+  gravity: 'Gravity tubing',
+  vacuum: 'Vacuum tubing',
+};
+
+const compass = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];
+/** 200 → "200° SW". */
+export const formatAzimuth = (deg: number) =>
+  `${Math.round(deg)}° ${compass[Math.round(deg / 45) % compass.length]}`;
+
+const columns = (unit: LengthUnit): Column<Taphole>[] => [
+  { key: 'season', header: 'Season', cell: (t) => t.season },
+  {
+    key: 'height',
+    header: 'Height',
+    align: 'right',
+    cell: (t) => formatLength(t.heightCm, unit, 0),
+  },
+  { key: 'azimuth', header: 'Azimuth', align: 'right', cell: (t) => formatAzimuth(t.azimuthDeg) },
+  {
+    key: 'depth',
+    header: 'Depth',
+    align: 'right',
+    cell: (t) => formatLength(t.depthCm, unit, unit === 'in' ? 2 : 1),
+  },
+  { key: 'bit', header: 'Bit', align: 'right', cell: (t) => formatBit(t.bitCm, unit) },
+  { key: 'collection', header: 'Collection', cell: (t) => collectionLabels[t.collection] },
+];
+
+/** Every hole drilled in this tree, newest season first. */
+export function TapholeList({ treeId }: { treeId: number }) {
+  const tapholes = useTapholes(treeId);
+  const { unit } = useUnitSystem();
+
+  let body;
+  if (tapholes.isPending) body = <TableSkeleton rows={3} label="Loading tapholes" />;
+  else if (tapholes.isError)
+    body = (
+      <ErrorState
+        title="We couldn't load this tree's tapholes."
+        error={tapholes.error}
+        onRetry={() => void tapholes.refetch()}
+      />
+    );
+  else if (tapholes.data.items.length === 0)
+    body = <EmptyState title="No tapholes recorded for this tree yet" />;
+  else {
+    const rows = [...tapholes.data.items].sort((a, b) => b.season - a.season || a.id - b.id);
+    body = <DataTable label="Tapholes" columns={columns(unit)} rows={rows} rowKey={(t) => t.id} />;
+  }
+
+  return (
+    <section aria-labelledby="tapholes-heading">
+      <h2 id="tapholes-heading" className="mb-2 text-lg font-bold">
+        Tapholes
+      </h2>
+      {body}
+    </section>
+  );
+}

@@ -1,0 +1,23 @@
+import type { Species, TreeStatus } from '@shared/schemas/enums';
+
+export type TreeSort =
+  'tag' | '-tag' | 'dbh' | '-dbh' | 'status' | '-status' | 'species' | '-species';
+
+/** One register page as the API is asked for it. */
+export interface TreeListFilters {
+  page: number;
+  pageSize: number;
+  sort: TreeSort;
+  q?: string;
+  status?: TreeStatus;
+  species?: Species;
+}
+
+export const treeKeys = {
+  all: ['trees'] as const,
+  lists: () => [...treeKeys.all, 'list'] as const,
+  list: (sugarbushId: number, filters: TreeListFilters) =>
+    [...treeKeys.lists(), sugarbushId, filters] as const,
+  details: () => [...treeKeys.all, 'detail'] as const,
+  detail: (treeId: number) => [...treeKeys.details(), treeId] as const,
+};

@@ -1,0 +1,68 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { QueryClient } from '@tanstack/react-query';
+import type { MeResponse } from '@shared/schemas/auth';
+import type { Role } from '@shared/schemas/enums';
+import { api, isApiError } from './api-client';
+
+export const authKeys = {
+  all: ['auth'] as const,
+  me: () => [...authKeys.all, 'me'] as const,
+};
+
+/** The signed-in user, or null when nobody is signed in (the API answers 401). */
+export async function getMe(signal?: AbortSignal): Promise<MeResponse | null> {
+  try {
+    return await api.get<MeResponse>('/auth/me', { signal });
+  } catch (error) {
+    if (isApiError(error) && error.status === 401) return null;
+    throw error;
+  }
+}
+
+export const meQueryOptions = () =>
+  queryOptions({
+    queryKey: authKeys.me(),
+    queryFn: ({ signal }) => getMe(signal),
+    staleTime: 5 * 60_000,
+  });
+
+export const useMe = () => useQuery(meQueryOptions());
+
+/** Loaders call this: the signed-in user, or null. */
+export const ensureMe = (queryClient: QueryClient) => queryClient.ensureQueryData(meQueryOptions());
+
+export type Permission =
+  | 'read'
+  | 'edit-trees'
+  | 'record-measurements'
+  | 'record-tapholes'
+  | 'write-notes'
+  | 'manage-members';
+
+const grants: Record<Permission, readonly Role[]> = {
+  read: ['owner', 'forester', 'tapper', 'consultant'],
+  'edit-trees': ['owner', 'forester'],
+  'record-measurements': ['owner', 'forester'],
+  'record-tapholes': ['owner', 'tapper'],
+  'write-notes': ['owner', 'consultant'],
+  'manage-members': ['owner'],
+};
+
+export const rolesFor = (permission: Permission): readonly Role[] => grants[permission];
+
+export const can = (role: Role | undefined, permission: Permission): boolean =>
+  role !== undefined && grants[permission].includes(role);
+
+export const roleLabels: Record<Role, string> = {
+  owner: 'Owner',
+  forester: 'Forester',
+  tapper: 'Tapper',
+  consultant: 'Consultant',
+};
+
+/** The user's role in one sugarbush, or undefined while unknown or when not a member. */
+export function useRole(sugarbushId: number | undefined): Role | undefined {
+  const { data: me } = useMe();
+  if (sugarbushId === undefined) return undefined;
+  return me?.memberships.find((m) => m.sugarbushId === sugarbushId)?.role;
+}

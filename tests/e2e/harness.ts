@@ -1,0 +1,58 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { startServer } from '../../server/index';
+import { seedDemoIfEmpty } from '../../server/scripts/seed-demo';
+
+/** The real server on a free port and a fresh SQLite file holding the demo stand. */
+export async function startDemoServer() {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'clearwood-e2e-'));
+  const running = await startServer({
+    ...process.env,
+    NODE_ENV: 'test',
+    PORT: '0',
+    DATABASE_FILE: path.join(dir, 'e2e.sqlite'),
+    LOGIN_RATE_LIMIT: '1000',
+  });
+  await seedDemoIfEmpty(running.db);
+  return running;
+}
+
+/** Debian's Chromium driven by playwright-core: no browser download, no outside traffic. */
+export async function launchBrowser(): Promise<Browser> {
+  const executablePath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+  if (!fs.existsSync(executablePath))
+    throw new Error(`No Chromium at ${executablePath} (set CHROMIUM_PATH)`);
+  return chromium.launch({
+    executablePath,
+    headless: true,
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+    ],
+  });
+}
+
+/** Every request a page makes; tests fail on any host but localhost. */
+export function recordHosts(page: Page): Set<string> {
+  const hosts = new Set<string>();
+  page.on('request', (req) => {
+    const url = new URL(req.url());
+    if (url.protocol.startsWith('http')) hosts.add(url.hostname);
+  });
+  return hosts;
+}
+
+export async function signInAs(page: Page, baseUrl: string, email: string) {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill('maple-demo-2027');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
