@@ -1,0 +1,110 @@
+/**
+ * The advisor's public entry: the one index file in the codebase, so callers import the
+ * advisor's contract from `shared/rules` without reaching into its modules.
+ */
+export {
+  profiles,
+  profileKeys,
+  isProfileKey,
+  resolveProfile,
+  defaultZone,
+  type ProfileKey,
+} from './profiles';
+export type {
+  GuidelineProfile,
+  TapBand,
+  DrillSetting,
+  StressedTreeRules,
+  ZoneParams,
+} from './profile-types';
+export { tapsForDbh, bandForDbh } from './tap-table';
+export {
+  customProfileSchema,
+  validateCustomProfile,
+  CUSTOM_LIMITS,
+  type CustomProfileInput,
+  type CustomProfileResult,
+} from './custom-profile';
+export {
+  basalAreaM2,
+  basalAreaCm2,
+  basalAreaFt2FromIn,
+  standBasalAreaFt2PerAcre,
+  dbhFromCircumference,
+  circumferenceFromDbh,
+  basalAreaGrowthCm2,
+} from './basal-area';
+export { sapPerSyrup, type SapRule } from './sap';
+export {
+  freezeThaw,
+  sapRunLabels,
+  sapSpoilage,
+  type SapRunOutlook,
+  type SapSpoilage,
+} from './weather';
+export {
+  cmToIn,
+  inToCm,
+  cm2ToIn2,
+  in2ToCm2,
+  cToF,
+  fToC,
+  CM_PER_IN,
+  azimuthGapDeg,
+  normalizeAzimuth,
+} from './units';
+export { seasonOf, fractionalYear } from './dates';
+export { growth, type Growth, type GrowthFlag, type DatedDbh } from './growth';
+export {
+  minimumBasalAreaGrowthIn2,
+  minimumGrowthLine,
+  healthyGrowthLine,
+  type GrowthLinePoint,
+} from './minimum-growth';
+export {
+  conductiveShare,
+  steadyStateShare,
+  minimumSustainableGrowth,
+  minimumSustainableRadialGrowth,
+  maxSustainableTaps,
+  stainAgeSum,
+  zoneVolumeCm3,
+  stainVolumeCm3,
+  woodDepthCm,
+  DEFAULT_BIT_CM,
+  DEFAULT_DEPTH_CM,
+  type ZoneHole,
+  type ConductiveShareInput,
+  type RateInput,
+} from './tapping-zone';
+export {
+  projectConductiveShare,
+  type ProjectionInput,
+  type ProjectedSeason,
+} from './zone-projection';
+export { isClearOf, arcDistanceCm, type Spot, type Spacing } from './spacing';
+export {
+  placeTapholes,
+  SAME_SEASON_HEIGHT_GAP_CM,
+  type PlacementInput,
+  type PlacementResult,
+} from './placement';
+export { adviseDrilling, SHALLOW_DEPTH_CM, WIDE_SPOUT_BIT_CM } from './drilling';
+export {
+  adviseTree,
+  STALE_AFTER_SEASONS,
+  ASSUMED_RADIAL_GROWTH_CM,
+  type Advice,
+  type AdviseOptions,
+} from './advise-tree';
+export type { AdvisorTree, AdvisorMeasurement, AdvisorTaphole } from './tree-record';
+export {
+  planStand,
+  type StandTree,
+  type PlanItem,
+  type PlanTotals,
+  type StandPlan,
+} from './plan-stand';
+export { verdicts, verdictByKey, type VerdictKey, type Verdict } from './verdicts';
+export { warningCodes, type WarningCode, type AdvisorWarning } from './warnings';
+export { sources } from './sources';
