@@ -4,6 +4,7 @@ import { requireAuth } from './middleware/auth';
 import { devRoutes } from './modules/dev/dev.routes';
 import { measurementsRoutes } from './modules/measurements/measurements.routes';
 import { notesRoutes } from './modules/notes/notes.routes';
+import { plansRoutes } from './modules/plans/plans.routes';
 import { sugarbushesRoutes } from './modules/sugarbushes/sugarbushes.routes';
 import { tapholesRoutes } from './modules/tapholes/tapholes.routes';
 import { treesRoutes } from './modules/trees/trees.routes';
@@ -18,5 +19,6 @@ export function apiRoutes(ctx: AppContext) {
   router.use(measurementsRoutes(ctx));
   router.use(tapholesRoutes(ctx));
   router.use(notesRoutes(ctx));
+  router.use(plansRoutes(ctx));
   return router;
 }

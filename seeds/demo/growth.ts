@@ -71,7 +71,9 @@ export function growTree(key: string, spec: TreeSpec, lastSeason: number): Growt
   const last = Math.min(lastSeason, spec.measuredThrough);
   for (let s = spec.firstSeason; s <= last; s++) {
     const error = rng.clampedNormal(0, spec.noiseSd, -0.3, 0.3);
-    const slip = spec.measureError?.season === s ? spec.measureError.cm : 0;
+    const slip =
+      (spec.measureError?.season === s ? spec.measureError.cm : 0) +
+      (spec.measureOffset && s >= spec.measureOffset.from ? spec.measureOffset.cm : 0);
     measurements.push({
       season: s,
       measuredOn: roundDate(key, s, spec.n),

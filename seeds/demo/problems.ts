@@ -24,6 +24,13 @@ export const DEMO_PROBLEM_TAGS: Record<ProblemCategory, string[]> = {
   // One lateral along the ledge, run hard for years on thin soil.
   'depleted-zone': ol(...range(841, 848)),
   'outside-boundary': ol(155, 730, 1093),
+  // Tagged during the 2026 round: not measured yet, or measured for the first time.
+  'newly-tagged': ol(1181, 1183, 1185),
+  'first-reading': ol(1182, 1184, 1186),
+  // An old 7/16 in bit found its way back into the kit in 2025.
+  'wide-spout': ol(1031, 1037, 1043),
+  // A new crew member has taped these above the butt swell since 2022: every reading runs low.
+  'misread-series': ol(1052, 1058, 1064),
 };
 
 export function problemOf(tag: string): ProblemCategory | null {
@@ -132,10 +139,30 @@ export function applyProblem(
       t.rate = rng.range(0.05, 0.1);
       t.noiseSd = 0.05;
       t.diebackBase = 10;
-      t.tapsOverride = { from: t.firstSeason, min: base.n % 3 === 0 ? 2 : 3, max: 3 };
+      t.tapsOverride = { from: t.firstSeason, min: 3, max: 4 };
       t.stainRate = 0.2;
       break;
     case 'outside-boundary':
+      break;
+    case 'newly-tagged':
+      t.firstSeason = lastSeason;
+      t.measuredThrough = lastSeason - 1;
+      t.noTapping = true;
+      break;
+    case 'wide-spout':
+      t.dbhStart = rng.range(48, 60);
+      t.wideSpoutFrom = 2025;
+      break;
+    case 'misread-series':
+      t.dbhStart = rng.range(38, 50);
+      t.rate = rng.range(0.2, 0.25);
+      t.noiseSd = 0.05;
+      t.measureOffset = { from: 2022, cm: -3 };
+      break;
+    case 'first-reading':
+      t.firstSeason = lastSeason;
+      t.dbhStart = rng.range(32, 45);
+      t.noTapping = true;
       break;
   }
   t.dbhStart = Math.round(t.dbhStart * 100) / 100;

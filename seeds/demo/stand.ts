@@ -135,6 +135,8 @@ export function ordinaryTree(layout: StandLayout, n: number, xy: XY): TreeSpec {
     measuredThrough: layout.lastSeason,
     tappedThrough: layout.lastSeason,
     noTapping: false,
+    wideSpoutFrom: null,
+    measureOffset: null,
     diedIn: null,
     tapsOverride: null,
     sloppyFrom: null,

@@ -13,6 +13,8 @@ export const traditionalTaps: TapTable = (d) =>
 /** Drilled 2 in deep with a 5/16 in bit (common practice). */
 export const DEPTH_CM = 2 * IN;
 export const BIT_CM = (5 / 16) * IN;
+/** The traditional 7/16 in bit, still used on a few trees. */
+export const WIDE_BIT_CM = (7 / 16) * IN;
 
 /**
  * A careful tapper keeps each new hole clear of every earlier one: at least 11.5 cm apart across
@@ -127,7 +129,7 @@ export function tapTree(spec: TreeSpec, g: GrowthHistory, o: TappingOptions): Ta
         heightCm: hole.h,
         azimuthDeg: hole.az,
         depthCm: o.depthCm,
-        bitCm: o.bitCm,
+        bitCm: spec.wideSpoutFrom !== null && s >= spec.wideSpoutFrom ? WIDE_BIT_CM : o.bitCm,
         collection: spec.collection,
         drilledOn,
         stainHit: rng.chance(spec.stainRate),

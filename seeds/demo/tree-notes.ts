@@ -161,6 +161,34 @@ export const writers: Record<ProblemCategory, Writer> = {
         `the wall. Re-take the GPS point with a longer fix.`,
     ),
   ],
+  'newly-tagged': () => [
+    note(
+      'follow-up',
+      `Tagged during the autumn round but the tape was not put on it. Measure it before the ` +
+        `plan is drawn up.`,
+    ),
+  ],
+  'wide-spout': () => [
+    note(
+      'advice',
+      `The last two seasons' holes were drilled with the old 7/16 in bit. Go back to 5/16 in: ` +
+        `the wider hole stains more wood for little more sap.`,
+    ),
+  ],
+  'misread-series': () => [
+    note(
+      'follow-up',
+      `Readings since 2022 run about 3 cm under the earlier ones. Check where the tape goes: ` +
+        `4.5 ft up the uphill side, not above the swell. Re-measure and correct the rows.`,
+    ),
+  ],
+  'first-reading': () => [
+    note(
+      'advice',
+      `First reading this autumn. One diameter says nothing of growth yet: tap it lightly, if ` +
+        `at all, until a second season is on record.`,
+    ),
+  ],
 };
 
 /** How many trees of each category get a note of their own. */
@@ -178,4 +206,8 @@ export const NOTED: Record<ProblemCategory, number> = {
   shrinking: 2,
   'depleted-zone': 3,
   'outside-boundary': 2,
+  'newly-tagged': 1,
+  'first-reading': 1,
+  'wide-spout': 1,
+  'misread-series': 1,
 };

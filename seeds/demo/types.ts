@@ -15,6 +15,10 @@ export const problemCategories = [
   'shrinking',
   'depleted-zone',
   'outside-boundary',
+  'newly-tagged',
+  'first-reading',
+  'wide-spout',
+  'misread-series',
 ] as const;
 export type ProblemCategory = (typeof problemCategories)[number];
 
@@ -52,8 +56,12 @@ export interface TreeSpec {
   diedIn: number | null;
   /** From `from` on, every season carries between min and max holes whatever the table says. */
   tapsOverride: { from: number; min: number; max: number } | null;
+  /** From this season on, the tapper used the old 7/16 in bit on this tree. */
+  wideSpoutFrom: number | null;
   /** From this season on, the first hole is drilled right beside last season's. */
   sloppyFrom: number | null;
+  /** From season `from` on every reading is off by `cm` (taken at the wrong height). */
+  measureOffset: { from: number; cm: number } | null;
   /** A reading error of `cm` (negative: too small) in one season. */
   measureError: { season: number; cm: number } | null;
   stainRate: number;

@@ -1,0 +1,82 @@
+import type { Knex } from 'knex';
+import type { StandTree } from '../../../shared/rules/index';
+
+/** Trees with their standing record — measurements no later row corrects, and every taphole. */
+export async function loadStandTrees(
+  db: Knex,
+  sugarbushId: number,
+  treeId?: number,
+): Promise<(StandTree & { id: number; tag: string })[]> {
+  const trees: {
+    id: number;
+    tag: string;
+    species: StandTree['species'];
+    status: StandTree['status'];
+  }[] = await db('trees')
+    .where({ sugarbush_id: sugarbushId })
+    .modify((q) => {
+      if (treeId) q.where({ id: treeId });
+    })
+    .orderBy('tag')
+    .select('id', 'tag', 'species', 'status');
+  const ids = trees.map((t) => t.id);
+  const scope = (table: string, alias: string) =>
+    treeId
+      ? db(`${table} as ${alias}`).where(`${alias}.tree_id`, treeId)
+      : db(`${table} as ${alias}`)
+          .join('trees as t', 't.id', `${alias}.tree_id`)
+          .where('t.sugarbush_id', sugarbushId);
+
+  const measurements = await scope('measurements', 'm')
+    .whereNotExists(db('measurements as c').select(db.raw('1')).whereRaw('c.corrects_id = m.id'))
+    .orderBy(['m.tree_id', 'm.measured_on', 'm.id'])
+    .select('m.tree_id', 'm.measured_on', 'm.dbh_cm', 'm.crown_dieback_pct');
+  const holes = await scope('tapholes', 'h')
+    .orderBy(['h.tree_id', 'h.season', 'h.id'])
+    .select(
+      'h.tree_id',
+      'h.season',
+      'h.height_cm',
+      'h.azimuth_deg',
+      'h.depth_cm',
+      'h.bit_cm',
+      'h.collection',
+    );
+
+  const byId = new Map<
+    number,
+    StandTree & {
+      id: number;
+      tag: string;
+      measurements: StandTree['measurements'][number][];
+      tapholes: StandTree['tapholes'][number][];
+    }
+  >();
+  for (const t of trees)
+    byId.set(t.id, {
+      id: t.id,
+      tag: t.tag,
+      species: t.species,
+      status: t.status,
+      measurements: [],
+      tapholes: [],
+    });
+  for (const m of measurements) {
+    byId.get(m.tree_id)?.measurements.push({
+      measuredOn: m.measured_on,
+      dbhCm: m.dbh_cm,
+      crownDiebackPct: m.crown_dieback_pct,
+    });
+  }
+  for (const h of holes) {
+    byId.get(h.tree_id)?.tapholes.push({
+      season: h.season,
+      heightCm: h.height_cm,
+      azimuthDeg: h.azimuth_deg,
+      depthCm: h.depth_cm,
+      bitCm: h.bit_cm,
+      collection: h.collection,
+    });
+  }
+  return ids.map((id) => byId.get(id)!);
+}

@@ -1,0 +1,98 @@
+import type { AppContext } from '../../context';
+import { AppError } from '../../errors';
+import {
+  adviseTree,
+  planStand,
+  resolveProfile,
+  validateCustomProfile,
+  type GuidelineProfile,
+} from '../../../shared/rules/index';
+import {
+  upcomingSeason,
+  type PlanItem,
+  type PlanQuery,
+  type ProfileSummary,
+  type StandPlanResponse,
+  type TreeAdvice,
+} from '../../../shared/schemas/plan';
+import { loadStandTrees } from './plans.repository';
+
+const summary = (p: GuidelineProfile): ProfileSummary => ({
+  key: p.key,
+  label: p.label,
+  source: p.source,
+});
+
+const sorters: Record<string, (a: PlanItem, b: PlanItem) => number> = {
+  tag: (a, b) => a.tag.localeCompare(b.tag),
+  taps: (a, b) => a.taps - b.taps,
+  dbh: (a, b) => (a.dbhCm ?? -1) - (b.dbhCm ?? -1),
+  share: (a, b) => a.conductiveShare - b.conductiveShare,
+  verdict: (a, b) => a.verdict.localeCompare(b.verdict),
+};
+
+export function plansService(ctx: AppContext) {
+  async function standSettings(sugarbushId: number) {
+    const row = await ctx
+      .db('sugarbushes')
+      .where({ id: sugarbushId })
+      .first('profile', 'custom_profile', 'sunny_azimuth_deg');
+    if (!row) throw new AppError(404, 'not-found', 'Sugarbush not found');
+    let profile: GuidelineProfile;
+    if (row.profile === 'custom') {
+      const result = validateCustomProfile(
+        row.custom_profile ? JSON.parse(row.custom_profile) : null,
+      );
+      if (!result.ok)
+        throw new AppError(
+          409,
+          'profile-invalid',
+          'The saved custom profile is not valid: fix it in Settings',
+        );
+      profile = result.profile;
+    } else {
+      profile = resolveProfile(row.profile);
+    }
+    return { profile, sunnyAzimuthDeg: row.sunny_azimuth_deg as number };
+  }
+
+  return {
+    async adviceForTree(
+      sugarbushId: number,
+      treeId: number,
+      season = upcomingSeason(),
+    ): Promise<TreeAdvice> {
+      const { profile, sunnyAzimuthDeg } = await standSettings(sugarbushId);
+      const [tree] = await loadStandTrees(ctx.db, sugarbushId, treeId);
+      if (!tree) throw new AppError(404, 'not-found', 'Tree not found');
+      const advice = adviseTree(tree, { season, profile, sunnyAzimuthDeg, withProjection: true });
+      return { ...advice, treeId: tree.id, tag: tree.tag, season, profile: summary(profile) };
+    },
+
+    async planForStand(sugarbushId: number, q: PlanQuery): Promise<StandPlanResponse> {
+      const season = q.season ?? upcomingSeason();
+      const { profile, sunnyAzimuthDeg } = await standSettings(sugarbushId);
+      const trees = await loadStandTrees(ctx.db, sugarbushId);
+      const plan = planStand(trees, { season, profile, sunnyAzimuthDeg });
+      let items = plan.items as PlanItem[];
+      if (q.q) items = items.filter((i) => i.tag.toLowerCase().includes(q.q!.toLowerCase()));
+      if (q.verdict) items = items.filter((i) => i.verdict === q.verdict);
+      if (q.warning) items = items.filter((i) => i.warnings.some((w) => w.code === q.warning));
+      if (q.sort) {
+        const key = q.sort.replace(/^-/, '');
+        const sign = q.sort.startsWith('-') ? -1 : 1;
+        items = [...items].sort((a, b) => sign * sorters[key](a, b) || a.tag.localeCompare(b.tag));
+      }
+      const start = (q.page - 1) * q.pageSize;
+      return {
+        season,
+        profile: summary(profile),
+        totals: plan.totals,
+        items: items.slice(start, start + q.pageSize),
+        total: items.length,
+        page: q.page,
+        pageSize: q.pageSize,
+      };
+    },
+  };
+}
