@@ -69,7 +69,7 @@ export function treeAccess(db: Knex): RequestHandler {
   };
 }
 
-/** The member's role must allow the action (CONTRACT role table), else 403. */
+/** The member's role must allow the action (the table in shared/schemas/permissions.ts), else 403. */
 export function requirePermission(action: Permission): RequestHandler {
   return (_req, res, next) => {
     if (!can(accessOf(res)?.role, action)) return next(forbidden());

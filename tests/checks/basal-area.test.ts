@@ -6,7 +6,7 @@ import {
   standBasalAreaFt2PerAcre,
 } from '../../shared/rules/basal-area';
 
-// Basal area: BA(ft²) = π/576 · DBH(in)², BA(m²) = π/40000 · DBH(cm)² — P (DOMAIN.md §4).
+// Basal area: BA(ft²) = π/576 · DBH(in)², BA(m²) = π/40000 · DBH(cm)² — P.
 describe('basal area check values', () => {
   it.each([
     [10, 0.545],
@@ -31,7 +31,7 @@ describe('basal area check values', () => {
   });
 });
 
-// DBH measured with a diameter tape, or as circumference: DBH = C / π (DOMAIN.md §1).
+// DBH measured with a diameter tape, or as circumference: DBH = C / π.
 describe('DBH from circumference', () => {
   it('a circumference of π × 40 cm is a 40 cm DBH (DBH = C / π)', () => {
     expect(dbhFromCircumference(Math.PI * 40)).toBeCloseTo(40, 10);

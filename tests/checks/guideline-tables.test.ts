@@ -5,7 +5,7 @@ import { inToCm } from '../../shared/rules/units';
 
 const atIn = (dbhIn: number, key: keyof typeof profiles) => tapsForDbh(inToCm(dbhIn), key);
 
-// DOMAIN.md §2. Each table is checked just below, at and above every edge.
+// The published guideline tables. Each table is checked just below, at and above every edge.
 describe('conservative: NAMSPM 2nd ed. 2006, as summarised by UVM Proctor Maple Research Center — S', () => {
   it.each([
     [11.99, 0],

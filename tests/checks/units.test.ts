@@ -7,7 +7,7 @@ describe('units', () => {
     expect(cmToIn(2.54)).toBe(1);
   });
 
-  it('°F = °C × 9/5 + 32 (DOMAIN.md canonical units)', () => {
+  it('°F = °C × 9/5 + 32 (definition of the Fahrenheit scale)', () => {
     expect(cToF(0)).toBe(32);
     expect(cToF(100)).toBe(212);
     expect(fToC(40)).toBeCloseTo(4.444, 3);
