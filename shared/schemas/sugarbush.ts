@@ -21,6 +21,8 @@ export const sugarbushPatchSchema = z.object({
   boundary: boundarySchema.nullable().optional(),
   profile: z.string().min(1).max(40).optional(),
   sunnyAzimuthDeg: z.number().min(0).lt(360).optional(),
+  /** A custom guideline set (validated by the advisor's `validateCustomProfile`). */
+  customProfile: z.unknown().optional(),
 });
 
 export interface Sugarbush {
@@ -28,6 +30,7 @@ export interface Sugarbush {
   name: string;
   boundary: Boundary | null;
   profile: string;
+  customProfile: unknown | null;
   sunnyAzimuthDeg: number;
   role: Role;
   treeCount: number;

@@ -18,6 +18,7 @@ export const sugarbush = (overrides: Partial<Sugarbush> = {}): Sugarbush => ({
   name: 'Hollow Creek',
   boundary: null,
   profile: 'conservative',
+  customProfile: null,
   sunnyAzimuthDeg: 180,
   role: 'forester',
   treeCount: 1203,

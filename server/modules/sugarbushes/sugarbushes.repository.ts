@@ -7,6 +7,7 @@ interface Row {
   name: string;
   boundary: string | null;
   profile: string;
+  custom_profile: string | null;
   sunny_azimuth_deg: number;
   role: Role;
   tree_count: number;
@@ -17,6 +18,7 @@ const toSugarbush = (r: Row): Sugarbush => ({
   name: r.name,
   boundary: r.boundary ? JSON.parse(r.boundary) : null,
   profile: r.profile,
+  customProfile: r.custom_profile ? JSON.parse(r.custom_profile) : null,
   sunnyAzimuthDeg: r.sunny_azimuth_deg,
   role: r.role,
   treeCount: Number(r.tree_count),
@@ -33,6 +35,7 @@ export function sugarbushesRepository(db: Knex) {
         's.name',
         's.boundary',
         's.profile',
+        's.custom_profile',
         's.sunny_azimuth_deg',
         'm.role',
         db.raw('(select count(*) from trees t where t.sugarbush_id = s.id) as tree_count'),
