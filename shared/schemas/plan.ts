@@ -29,6 +29,10 @@ export interface ProfileSummary {
   key: string;
   label: string;
   source: string;
+  /** Height band tapholes go in, cm above ground. */
+  heightBand: { minCm: number; maxCm: number };
+  /** Conductive share below which the tapping zone counts as depleted. */
+  floor: number;
 }
 
 export interface TreeAdvice extends Advice {

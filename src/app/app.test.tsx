@@ -83,8 +83,8 @@ describe('the app shell', () => {
   });
 
   it('when a section is not built yet, then it says so calmly', async () => {
-    openApp('/sugarbushes/3/plan', asRole('consultant'));
-    expect(await screen.findByRole('heading', { name: 'Season plan' })).toBeInTheDocument();
+    openApp('/sugarbushes/3/notes', asRole('consultant'));
+    expect(await screen.findByRole('heading', { name: 'Notes' })).toBeInTheDocument();
     expect(screen.getByText('Coming soon in Clearwood')).toBeInTheDocument();
   });
 });

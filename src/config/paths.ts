@@ -33,7 +33,8 @@ export const paths = {
   trees: sugarbushSection('trees'),
   tree: {
     path: '/trees/:treeId',
-    href: (treeId: Id) => `/trees/${encodeURIComponent(String(treeId))}`,
+    href: (treeId: Id, search?: SearchInit) =>
+      withSearch(`/trees/${encodeURIComponent(String(treeId))}`, search),
   },
   map: sugarbushSection('map'),
   round: sugarbushSection('round'),

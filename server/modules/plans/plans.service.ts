@@ -21,7 +21,12 @@ const summary = (p: GuidelineProfile): ProfileSummary => ({
   key: p.key,
   label: p.label,
   source: p.source,
+  heightBand: { minCm: p.heightBand.minCm, maxCm: p.heightBand.maxCm },
+  floor: p.zone.floor,
 });
+
+/** Trees the advisor does not tap have no meaningful share: they sort after every tapped one. */
+const untappable = new Set(['too-small', 'retired', 'unmeasured']);
 
 const sorters: Record<string, (a: PlanItem, b: PlanItem) => number> = {
   tag: (a, b) => a.tag.localeCompare(b.tag),
@@ -81,7 +86,12 @@ export function plansService(ctx: AppContext) {
       if (q.sort) {
         const key = q.sort.replace(/^-/, '');
         const sign = q.sort.startsWith('-') ? -1 : 1;
-        items = [...items].sort((a, b) => sign * sorters[key](a, b) || a.tag.localeCompare(b.tag));
+        items = [...items].sort((a, b) => {
+          if (key === 'share' && untappable.has(a.verdict) !== untappable.has(b.verdict)) {
+            return untappable.has(a.verdict) ? 1 : -1;
+          }
+          return sign * sorters[key](a, b) || a.tag.localeCompare(b.tag);
+        });
       }
       const start = (q.page - 1) * q.pageSize;
       return {

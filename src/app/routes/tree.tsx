@@ -3,11 +3,11 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
+import { AdviceCard } from '@/features/advice/components/advice-card';
 import { DiameterHistory } from '@/features/measurements/components/diameter-history';
 import { MeasurementForm } from '@/features/measurements/components/measurement-form';
 import { TapholeList } from '@/features/tapholes/components/taphole-list';
 import { useTree } from '@/features/trees/api/get-tree';
-import { AdviceSlot } from '@/features/trees/components/advice-slot';
 import { TappingCaution } from '@/features/trees/components/tapping-caution';
 import { TreeHeader } from '@/features/trees/components/tree-header';
 import { isApiError } from '@/lib/api-client';
@@ -57,10 +57,8 @@ export function TreeRoute() {
       <div className="grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         {/* On a phone the work comes first: the advice, then the form; the record follows. */}
         <div className="flex min-w-0 flex-col gap-6 lg:order-2">
-          {/* The advisor's answer for the coming season goes here. */}
-          <AdviceSlot />
+          <AdviceCard treeId={treeId} caution={<TappingCaution />} />
           {canRecord && <MeasurementForm treeId={treeId} />}
-          <TappingCaution />
         </div>
         <div className="flex min-w-0 flex-col gap-8 lg:order-1">
           <DiameterHistory treeId={treeId} canRecord={canRecord} />

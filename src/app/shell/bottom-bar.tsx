@@ -36,7 +36,7 @@ export function BottomBar({ user, sugarbushId, role, section }: Props) {
     : [];
 
   return (
-    <div className="md:hidden">
+    <div className="md:hidden print:hidden">
       {open && (
         <div
           id={panelId}

@@ -19,7 +19,7 @@ export function SideRail({ user, sugarbushId, role, section }: Props) {
   const switchTo = useSwitchSugarbush(section);
   const { signOut, pending } = useSignOut();
   return (
-    <div className="sticky top-0 hidden h-screen w-60 shrink-0 flex-col border-r border-rule px-4 py-6 md:flex">
+    <div className="sticky top-0 hidden h-screen w-60 shrink-0 flex-col border-r border-rule px-4 py-6 md:flex print:hidden">
       <Link to={paths.home.href()} className="text-lg font-bold tracking-wide">
         Clearwood
       </Link>

@@ -6,6 +6,7 @@ import {
 } from '@shared/schemas/measurement';
 import { api } from '@/lib/api-client';
 import { treeKeys } from '@/features/trees/api/tree-keys';
+import { planKeys } from '@/features/plans/api/plan-keys';
 import { measurementKeys } from './measurement-keys';
 
 export { measurementInputSchema as createMeasurementInputSchema };
@@ -23,6 +24,8 @@ export function useCreateMeasurement(treeId: number) {
         // The tree's latest DBH changes, in its header and in every register page.
         queryClient.invalidateQueries({ queryKey: treeKeys.detail(treeId) }),
         queryClient.invalidateQueries({ queryKey: treeKeys.lists() }),
+        // A new diameter can change the season plan's verdicts and totals.
+        queryClient.invalidateQueries({ queryKey: planKeys.all }),
       ]),
   });
 }

@@ -1,0 +1,171 @@
+import { render, screen, waitFor, within } from '@testing-library/react';
+import { upcomingSeason } from '@shared/schemas/plan';
+import { json, mockApi, type Handler } from '@/test/api-mock';
+import { meAs, page, taphole } from '@/test/fixtures';
+import { renderPage } from '@/test/render';
+import { treeAdvice } from './advice-fixtures';
+import { AdviceCard } from './components/advice-card';
+import { VerdictBadge } from './components/verdict-badge';
+
+const ADVICE = 'GET /api/trees/7/advice';
+
+function openAdvice(
+  unitSystem: 'imperial' | 'metric',
+  routes: Record<string, unknown> = {},
+  url = '/trees/7',
+) {
+  const api = mockApi({
+    'GET /api/auth/me': meAs('tapper', unitSystem),
+    [ADVICE]: treeAdvice(),
+    'GET /api/trees/7/tapholes': page([
+      taphole({ id: 1, season: 2026, azimuthDeg: 225, heightCm: 70 }),
+      taphole({ id: 2, season: 2026, azimuthDeg: 60, heightCm: 120 }),
+    ]),
+    ...routes,
+  });
+  const view = renderPage({ path: '/trees/:treeId', url, element: <AdviceCard treeId={7} /> });
+  return { api, ...view };
+}
+
+describe('the advice card', () => {
+  it('when the advice is to tap twice in metric, then the first line names each side and its height in metres, and the drill in millimetres', async () => {
+    const { api } = openAdvice('metric');
+    expect(
+      await screen.findByText('Tap twice: south at 1.10 m, north at 0.80 m.'),
+    ).toBeInTheDocument();
+    expect(
+      screen.getByText('Drill with a 7.9 mm bit, 5.1 cm deep including bark.'),
+    ).toBeInTheDocument();
+    expect(api.to(ADVICE)[0].url.searchParams.get('season')).toBe(String(upcomingSeason()));
+  });
+
+  it('when the user works in imperial units, then heights read in feet and inches and the bit as a fraction', async () => {
+    openAdvice('imperial');
+    expect(
+      await screen.findByText('Tap twice: south at 3 ft 7 in, north at 2 ft 7 in.'),
+    ).toBeInTheDocument();
+    expect(
+      screen.getByText('Drill with a 5/16 in bit, 2 in deep including bark.'),
+    ).toBeInTheDocument();
+  });
+
+  it('when a warning has a source, then the source is one click away behind "Why?"', async () => {
+    const { user } = openAdvice('metric', {
+      [ADVICE]: treeAdvice({
+        verdict: 'tap-reduced',
+        taps: 1,
+        placements: [{ azimuthDeg: 135, heightCm: 100 }],
+        reasons: ['Growth is below the minimum for two taps.'],
+        warnings: [
+          {
+            code: 'slow-growth',
+            message: 'Basal area grew 1.10 in² a year; a tree this size needs 2.60 in².',
+            source: 'van den Berg and others 2016, Forest Science',
+          },
+          { code: 'stale-measurement', message: 'Last measured in 2021.' },
+        ],
+      }),
+    });
+    const warnings = await screen.findByRole('region', { name: 'Warnings' });
+    const slow = within(warnings)
+      .getByText(/Basal area grew 1.10/)
+      .closest('li')!;
+    expect(within(slow).getByText('Slow growth.')).toBeInTheDocument();
+    const source = within(slow).getByText(/Source: van den Berg/);
+    expect(source).not.toBeVisible();
+
+    await user.click(within(slow).getByRole('button', { name: 'Why?' }));
+    expect(source).toBeVisible();
+    expect(within(slow).getByRole('button', { name: 'Why?' })).toHaveAttribute(
+      'aria-expanded',
+      'true',
+    );
+    // A warning without a source offers no "Why?".
+    const stale = within(warnings)
+      .getByText(/Last measured in 2021/)
+      .closest('li')!;
+    expect(within(stale).queryByRole('button', { name: 'Why?' })).toBeNull();
+    expect(screen.getByText('Growth is below the minimum for two taps.')).toBeInTheDocument();
+  });
+
+  it('shows clear wood now, after drilling and in the long run, and growth against the minimum', async () => {
+    openAdvice('imperial');
+    expect(
+      await screen.findByText('94 % now → 93 % after drilling → 92 % in the long run at this rate'),
+    ).toBeInTheDocument();
+    expect(await screen.findByText('7.05 in²/yr measured')).toBeInTheDocument();
+    expect(screen.getByText(/tapping needs at least 3.32 in²\/yr/)).toBeInTheDocument();
+    expect(
+      screen.getByRole('img', { name: /Clear wood tapped twice a year: 94 % in 2027/ }),
+    ).toBeInTheDocument();
+  });
+
+  it('draws the trunk with a text alternative naming earlier holes and the numbered new ones', async () => {
+    openAdvice('metric');
+    const diagram = await screen.findByRole('img', { name: /Trunk diagram/ });
+    expect(diagram).toHaveAccessibleName(
+      expect.stringContaining(
+        'Earlier holes still in reach: south-west at 0.70 m (2026); north-east at 1.20 m (2026).',
+      ),
+    );
+    expect(diagram).toHaveAccessibleName(
+      expect.stringContaining('New holes: 1, south at 1.10 m; 2, north at 0.80 m.'),
+    );
+  });
+
+  it('when the user steps to the next season, then that season is asked for and kept in the URL', async () => {
+    const next = upcomingSeason() + 1;
+    const { api, router, user } = openAdvice('metric', {
+      [ADVICE]: ((req) => ({
+        status: 200,
+        body: treeAdvice({ season: Number(req.url.searchParams.get('season')) }),
+      })) satisfies Handler,
+    });
+    await screen.findByRole('heading', { name: `Advice for ${upcomingSeason()}` });
+    await user.click(screen.getByRole('button', { name: 'Next season' }));
+    expect(await screen.findByRole('heading', { name: `Advice for ${next}` })).toBeInTheDocument();
+    await waitFor(() =>
+      expect(api.to(ADVICE).at(-1)!.url.searchParams.get('season')).toBe(String(next)),
+    );
+    expect(new URLSearchParams(router.state.location.search).get('season')).toBe(String(next));
+  });
+
+  it('when a tree is resting, then it says so and gives no drilling', async () => {
+    openAdvice('metric', {
+      [ADVICE]: treeAdvice({ verdict: 'rest', taps: 0, placements: [] }),
+      'GET /api/trees/7/tapholes': page([]),
+    });
+    expect(
+      await screen.findByText('Rest this tree in 2027: drill no new holes.'),
+    ).toBeInTheDocument();
+    expect(screen.queryByText(/Drill with a/)).toBeNull();
+    expect(screen.queryByRole('img', { name: /Trunk diagram/ })).toBeNull();
+  });
+
+  it('when the advice fails to load, then Retry asks again', async () => {
+    let calls = 0;
+    const { user } = openAdvice('metric', {
+      [ADVICE]: ((req) =>
+        ++calls === 1
+          ? json(500, { error: { code: 'internal', message: 'Something went wrong' } })(req)
+          : { status: 200, body: treeAdvice() }) satisfies Handler,
+    });
+    expect(await screen.findByText(/We couldn't work out the advice/)).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Retry' }));
+    expect(await screen.findByText(/Tap twice/)).toBeInTheDocument();
+  });
+});
+
+describe('the verdict badge', () => {
+  it('shows the letter beside the label, so the verdict never rests on colour alone', () => {
+    render(<VerdictBadge verdict="tap-reduced" />);
+    expect(screen.getByText('F')).toBeInTheDocument();
+    expect(screen.getByText('Tap fewer')).toBeInTheDocument();
+  });
+
+  it('in its compact form, shows the letter and names the verdict for assistive tech', () => {
+    render(<VerdictBadge verdict="rest" showLabel={false} />);
+    const badge = screen.getByRole('img', { name: 'Rest' });
+    expect(badge).toHaveTextContent('R');
+  });
+});

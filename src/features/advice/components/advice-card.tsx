@@ -1,0 +1,166 @@
+import type { ReactNode } from 'react';
+import { useSearchParams } from 'react-router';
+import type { TreeAdvice } from '@shared/schemas/plan';
+import { ErrorState } from '@/components/ui/error-state';
+import { Skeleton } from '@/components/ui/skeleton';
+import { useTapholes } from '@/features/tapholes/api/get-tapholes';
+import { useUnitSystem } from '@/lib/units';
+import { useTreeAdvice } from '../api/get-tree-advice';
+import { adviceSentence, drillWords } from '../advice-words';
+import { parseSeason, seasonParam } from '../season';
+import { holesInReach, profileShape } from '../zone';
+import { AdviceFigures } from './advice-figures';
+import { SeasonStepper } from './season-stepper';
+import { ShareProjectionChart } from './share-projection-chart';
+import { TrunkDiagram } from './trunk-diagram';
+import { VerdictBadge } from './verdict-badge';
+import { WarningList } from './warning-list';
+import { WhyDisclosure } from './why-disclosure';
+
+/** The season shown is kept in the URL (`?season=`), so a link from the plan opens the same one. */
+function useSeasonSearchParam() {
+  const [params, setParams] = useSearchParams();
+  const season = parseSeason(params.get('season'));
+  const setSeason = (next: number) =>
+    setParams(
+      (prev) => {
+        const out = new URLSearchParams(prev);
+        const value = seasonParam(next);
+        if (value === undefined) out.delete('season');
+        else out.set('season', String(value));
+        return out;
+      },
+      { replace: true },
+    );
+  return [season, setSeason] as const;
+}
+
+/**
+ * The advisor's answer for one tree and season: how many taps, where, how to drill, and why.
+ * `caution` is the safety box shown where the work is advised.
+ */
+export function AdviceCard({ treeId, caution }: { treeId: number; caution?: ReactNode }) {
+  const [season, setSeason] = useSeasonSearchParam();
+  const advice = useTreeAdvice(treeId, season);
+
+  let body: ReactNode;
+  if (advice.isPending) {
+    body = (
+      <div role="status" aria-label="Loading advice" className="flex flex-col gap-3">
+        <Skeleton className="h-8 w-2/3" />
+        <Skeleton className="h-5 w-1/2" />
+        <Skeleton className="h-40 w-full" />
+      </div>
+    );
+  } else if (advice.isError) {
+    body = (
+      <ErrorState
+        title={`We couldn't work out the advice for ${season}.`}
+        error={advice.error}
+        onRetry={() => void advice.refetch()}
+      />
+    );
+  } else {
+    body = <AdviceBody advice={advice.data} stale={advice.isPlaceholderData} />;
+  }
+
+  return (
+    <section
+      aria-labelledby="advice-heading"
+      className="flex flex-col gap-4 rounded border border-rule p-4"
+      data-slot="tree-advice"
+    >
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h2 id="advice-heading" className="text-lg font-bold">
+          Advice for {season}
+        </h2>
+        <SeasonStepper season={season} onChange={setSeason} />
+      </div>
+      {body}
+      {caution}
+    </section>
+  );
+}
+
+function AdviceBody({ advice, stale }: { advice: TreeAdvice; stale: boolean }) {
+  const { system } = useUnitSystem();
+  const tapholes = useTapholes(advice.treeId);
+  const shape = profileShape(advice.profile.key);
+  const inReach = holesInReach(tapholes.data?.items ?? [], {
+    season: advice.season,
+    depthCm: advice.depthCm,
+    radialGrowthCmPerYear: advice.radialGrowthCmPerYear,
+    zone: shape.zone,
+  });
+  // Wait for the record before drawing, so the drawing never claims a trunk free of old holes.
+  const drawTrunk = !tapholes.isPending && (advice.taps > 0 || inReach.length > 0);
+
+  return (
+    <div aria-busy={stale || undefined} className="flex flex-col gap-4">
+      <div>
+        <VerdictBadge verdict={advice.verdict} size="lg" />
+        <p className="mt-2 text-lg font-bold">{adviceSentence(advice, advice.season, system)}</p>
+        {advice.taps > 0 && (
+          <p className="mt-1">Drill with a {drillWords(advice.bitCm, advice.depthCm, system)}.</p>
+        )}
+      </div>
+
+      {advice.reasons.length > 0 && (
+        <section aria-labelledby="advice-reasons-heading">
+          <h3 id="advice-reasons-heading" className="font-bold">
+            {advice.taps >= advice.tableTaps
+              ? 'Reasons'
+              : advice.taps === 0
+                ? 'Why no taps this season'
+                : `Why ${advice.taps} and not ${advice.tableTaps}`}
+          </h3>
+          <ul className="mt-1 list-disc space-y-1 pl-5">
+            {advice.reasons.map((r) => (
+              <li key={r}>{r}</li>
+            ))}
+          </ul>
+        </section>
+      )}
+
+      {drawTrunk && (
+        <TrunkDiagram
+          placements={advice.placements}
+          priorHoles={inReach}
+          priorHolesUnknown={tapholes.isError}
+          heightBand={advice.profile.heightBand}
+          stainLengthCm={shape.zone.stainLengthCm}
+          system={system}
+        />
+      )}
+
+      <WarningList warnings={advice.warnings} />
+
+      {advice.dbhCm !== null && advice.verdict !== 'retired' && (
+        <>
+          <AdviceFigures advice={advice} floor={advice.profile.floor} system={system} />
+          {advice.projection && advice.tableTaps > 0 && (
+            <ShareProjectionChart
+              projection={advice.projection}
+              floor={advice.profile.floor}
+              tapsPerYear={advice.taps}
+            />
+          )}
+        </>
+      )}
+
+      <ProfileLine advice={advice} />
+    </div>
+  );
+}
+
+function ProfileLine({ advice }: { advice: TreeAdvice }) {
+  return (
+    <div className="border-t border-rule pt-3 text-sm text-bark">
+      <p>
+        Guideline: {advice.profile.label}
+        {advice.tableTaps > 0 && ` — ${advice.tableTaps} by its table at this size`}.
+      </p>
+      <WhyDisclosure source={advice.profile.source} />
+    </div>
+  );
+}

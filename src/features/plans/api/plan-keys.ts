@@ -1,0 +1,22 @@
+import type { VerdictKey, WarningCode } from '@shared/rules/index';
+import type { PlanQuery } from '@shared/schemas/plan';
+
+export type PlanSort = NonNullable<PlanQuery['sort']>;
+
+/** One page of a season plan as the API is asked for it. */
+export interface PlanFilters {
+  season: number;
+  page: number;
+  pageSize: number;
+  sort: PlanSort;
+  q?: string;
+  verdict?: VerdictKey;
+  warning?: WarningCode;
+}
+
+export const planKeys = {
+  all: ['plans'] as const,
+  lists: () => [...planKeys.all, 'list'] as const,
+  list: (sugarbushId: number, filters: PlanFilters) =>
+    [...planKeys.lists(), sugarbushId, filters] as const,
+};

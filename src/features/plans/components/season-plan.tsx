@@ -1,0 +1,174 @@
+import { useCallback, type ReactNode } from 'react';
+import { Link } from 'react-router';
+import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { ErrorState } from '@/components/ui/error-state';
+import { PageHeader } from '@/components/ui/page-header';
+import { Skeleton, TableSkeleton } from '@/components/ui/skeleton';
+import { UnitToggle } from '@/components/ui/unit-toggle';
+import { paths } from '@/config/paths';
+import { SeasonStepper } from '@/features/advice/components/season-stepper';
+import { WhyDisclosure } from '@/features/advice/components/why-disclosure';
+import { formatNumber, useUnitSystem } from '@/lib/units';
+import { useSeasonPlan } from '../api/get-season-plan';
+import { PlanFilterBar } from './plan-filters';
+import { nextSort, toTableSort, usePlanSearchParams } from './plan-search-params';
+import { PlanTotalsStrip, PlanWarningSummary } from './plan-totals';
+import { SeasonPlanTable } from './season-plan-table';
+
+/**
+ * The season's plan for a whole stand: totals, then tree by tree how many taps and where.
+ * Prints as a field sheet. `caution` is the safety box shown with the work.
+ */
+export function SeasonPlan({
+  sugarbushId,
+  standName,
+  caution,
+}: {
+  sugarbushId: number;
+  standName: string | undefined;
+  caution?: ReactNode;
+}) {
+  const { filters, update } = usePlanSearchParams();
+  const { system } = useUnitSystem();
+  const plan = useSeasonPlan(sugarbushId, filters);
+  const onSearch = useCallback((q: string) => update({ q }, { replace: true }), [update]);
+  const filtered = Boolean(filters.q || filters.verdict || filters.warning);
+  const data = plan.data;
+
+  const header = (
+    <PageHeader
+      title={`Season plan ${filters.season}`}
+      subtitle={
+        <div className="flex flex-col gap-0.5">
+          <span>{standName ?? ' '}</span>
+          {data && (
+            <span className="text-sm">
+              Guideline: {data.profile.label}
+              <WhyDisclosure source={data.profile.source} label="Where this guideline comes from" />
+            </span>
+          )}
+        </div>
+      }
+      actions={
+        <div className="flex flex-wrap items-center gap-3">
+          <SeasonStepper season={filters.season} onChange={(season) => update({ season })} />
+          <UnitToggle />
+          <Button className="print:hidden" onClick={() => window.print()}>
+            Print field sheet
+          </Button>
+        </div>
+      }
+    />
+  );
+
+  const filterBar = (
+    <PlanFilterBar
+      filters={filters}
+      onSearch={onSearch}
+      onVerdict={(verdict) => update({ verdict })}
+      onWarning={(warning) => update({ warning })}
+    />
+  );
+
+  if (plan.isPending) {
+    return (
+      <>
+        {header}
+        <div role="status" aria-label="Loading the season plan">
+          <Skeleton className="mb-4 h-20 w-full" />
+          <TableSkeleton label="Loading plan rows" />
+        </div>
+      </>
+    );
+  }
+  if (plan.isError || !data) {
+    return (
+      <>
+        {header}
+        <ErrorState
+          title={`We couldn't load the plan for ${filters.season}.`}
+          error={plan.error}
+          onRetry={() => void plan.refetch()}
+        />
+      </>
+    );
+  }
+
+  const { items, total, page, pageSize, totals } = data;
+  const first = (page - 1) * pageSize + 1;
+  const last = Math.min(page * pageSize, total);
+  const hasNext = page * pageSize < total;
+
+  let list: ReactNode;
+  if (total === 0 && filtered) {
+    list = (
+      <EmptyState
+        title={filters.q ? `No trees match '${filters.q}'` : 'No trees match these filters'}
+      >
+        <Button
+          variant="quiet"
+          onClick={() => update({ q: undefined, verdict: undefined, warning: undefined })}
+        >
+          Clear search and filters
+        </Button>
+      </EmptyState>
+    );
+  } else if (total === 0) {
+    list = (
+      <EmptyState title="No trees yet — import a CSV or add the first tree on the map">
+        <Link to={paths.map.href(sugarbushId)} className="underline underline-offset-4">
+          Open the map
+        </Link>
+      </EmptyState>
+    );
+  } else {
+    list = (
+      <>
+        <p className="mb-2 hidden text-sm print:block">
+          Field sheet · {standName} · season {filters.season} · rows {formatNumber(first)}–
+          {formatNumber(last)} of {formatNumber(total)}
+        </p>
+        <SeasonPlanTable
+          items={items}
+          season={filters.season}
+          system={system}
+          sort={toTableSort(filters.sort)}
+          onSort={(field) => update({ sort: nextSort(filters.sort, field) })}
+          stale={plan.isPlaceholderData}
+        />
+        <nav
+          aria-label="Plan pages"
+          className="mt-4 flex flex-wrap items-center justify-between gap-3"
+        >
+          <p className="tabular-nums" aria-live="polite">
+            {formatNumber(first)}–{formatNumber(last)} of {formatNumber(total)}
+          </p>
+          <div className="flex gap-2">
+            <Button disabled={page <= 1} onClick={() => update({ page: page - 1 })}>
+              Previous
+            </Button>
+            <Button disabled={!hasNext} onClick={() => update({ page: page + 1 })}>
+              Next
+            </Button>
+          </div>
+        </nav>
+      </>
+    );
+  }
+
+  return (
+    <>
+      {header}
+      <PlanTotalsStrip totals={totals} />
+      <PlanWarningSummary
+        counts={totals.warningsByCode}
+        active={filters.warning}
+        onPick={(warning) => update({ warning })}
+      />
+      {filterBar}
+      {list}
+      {caution && <div className="mt-8">{caution}</div>}
+    </>
+  );
+}
