@@ -88,6 +88,15 @@ export function createApp(opts: AppOptions) {
   app.use('/api', apiRoutes(ctx));
   app.use('/api', notFoundHandler);
 
+  // Shipped demo tiles, straight from public/ so an older client build never shadows them.
+  app.use(
+    '/tiles',
+    express.static(path.join(root, 'public', 'tiles'), {
+      maxAge: production ? '1d' : 0,
+      fallthrough: false,
+    }),
+  );
+
   const clientDir = opts.clientDir === undefined ? path.join(root, 'dist') : opts.clientDir;
   if (clientDir && fs.existsSync(path.join(clientDir, 'index.html'))) {
     app.use(express.static(clientDir, { index: false, maxAge: production ? '1h' : 0 }));

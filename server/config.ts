@@ -1,3 +1,4 @@
+import path from 'node:path';
 import { z } from 'zod';
 
 const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
@@ -16,9 +17,17 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Clearwood <no-reply@clearwood.example>'),
   APP_URL: z.string().url().optional(),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(20),
+  /** Largest basemap (MBTiles) upload, in bytes; 200 MiB by default. */
+  BASEMAP_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(200 * 1024 * 1024),
+  /** Folder for uploaded basemaps; defaults to `basemaps/` beside the database file. */
+  BASEMAP_DIR: z.string().min(1).optional(),
 });
 
-export type Config = z.infer<typeof envSchema> & { appUrl: string };
+export type Config = z.infer<typeof envSchema> & { appUrl: string; BASEMAP_DIR: string };
 
 /** Parse the environment once; a bad value stops start-up with a message naming each variable. */
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -31,7 +40,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   if (c.MAIL_TRANSPORT === 'smtp' && !c.SMTP_URL) {
     throw new ConfigError('Invalid environment:\n  SMTP_URL: required when MAIL_TRANSPORT=smtp');
   }
-  return { ...c, appUrl: c.APP_URL ?? `http://localhost:${c.PORT}` };
+  return {
+    ...c,
+    appUrl: c.APP_URL ?? `http://localhost:${c.PORT}`,
+    BASEMAP_DIR: c.BASEMAP_DIR ?? path.join(path.dirname(c.DATABASE_FILE), 'basemaps'),
+  };
 }
 
 export class ConfigError extends Error {}

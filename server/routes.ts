@@ -1,7 +1,9 @@
 import { Router } from 'express';
 import type { AppContext } from './context';
 import { requireAuth } from './middleware/auth';
+import { basemapsRoutes } from './modules/basemaps/basemaps.routes';
 import { devRoutes } from './modules/dev/dev.routes';
+import { mapRoutes } from './modules/map/map.routes';
 import { measurementsRoutes } from './modules/measurements/measurements.routes';
 import { notesRoutes } from './modules/notes/notes.routes';
 import { plansRoutes } from './modules/plans/plans.routes';
@@ -20,5 +22,7 @@ export function apiRoutes(ctx: AppContext) {
   router.use(tapholesRoutes(ctx));
   router.use(notesRoutes(ctx));
   router.use(plansRoutes(ctx));
+  router.use(mapRoutes(ctx));
+  router.use(basemapsRoutes(ctx));
   return router;
 }

@@ -1,13 +1,18 @@
 import { z } from 'zod';
+import { validateBoundary, type Boundary } from '../geo/boundary';
 import type { Role } from './enums';
 
-const position = z.tuple([z.number().min(-180).max(180), z.number().min(-90).max(90)]);
-const ring = z.array(position).min(4, 'A ring needs at least four positions');
-export const boundarySchema = z.union([
-  z.object({ type: z.literal('Polygon'), coordinates: z.array(ring).min(1) }),
-  z.object({ type: z.literal('MultiPolygon'), coordinates: z.array(z.array(ring).min(1)).min(1) }),
-]);
-export type Boundary = z.infer<typeof boundarySchema>;
+/**
+ * A GeoJSON Polygon or MultiPolygon, checked by `validateBoundary` (closed rings of at least four
+ * positions, longitude/latitude ranges, no self-intersection); a failure names what is wrong.
+ */
+export const boundarySchema = z.unknown().transform((value, ctx): Boundary => {
+  const check = validateBoundary(value);
+  if (check.ok) return check.boundary;
+  ctx.addIssue({ code: 'custom', message: check.message });
+  return z.NEVER;
+});
+export type { Boundary };
 
 export const sugarbushInputSchema = z.object({
   name: z.string().trim().min(1, 'Name the sugarbush').max(120),

@@ -13,7 +13,9 @@ export function profileColumns(
   if (patch.customProfile !== undefined) {
     const result = validateCustomProfile(patch.customProfile);
     if (!result.ok) {
-      const fields = Object.fromEntries(result.errors.map((e) => [`customProfile${e.path ? `.${e.path}` : ''}`, e.message]));
+      const fields = Object.fromEntries(
+        result.errors.map((e) => [`customProfile${e.path ? `.${e.path}` : ''}`, e.message]),
+      );
       throw new AppError(400, 'invalid-input', 'The custom profile needs attention', fields);
     }
     row.custom_profile = JSON.stringify(patch.customProfile);

@@ -5,6 +5,7 @@ import { auditRepository } from '../audit/audit.repository';
 import { membersRepository } from '../members/members.repository';
 import type { ListQuery, Page } from '../../../shared/schemas/list-query';
 import type { Sugarbush } from '../../../shared/schemas/sugarbush';
+import { profileColumns } from './profile-choice';
 import { sugarbushesRepository } from './sugarbushes.repository';
 import type { z } from 'zod';
 import type { sugarbushInputSchema, sugarbushPatchSchema } from '../../../shared/schemas/sugarbush';
@@ -27,6 +28,7 @@ export function sugarbushesService(ctx: AppContext) {
 
     /** Whoever creates a sugarbush becomes its owner. */
     async create(userId: number, input: z.output<typeof sugarbushInputSchema>): Promise<Sugarbush> {
+      profileColumns({ profile: input.profile }, { profile: input.profile, customProfile: null });
       const id = await ctx.db.transaction(async (trx) => {
         const newId = await sugarbushesRepository(trx).create({
           name: input.name,
@@ -53,15 +55,18 @@ export function sugarbushesService(ctx: AppContext) {
       patch: z.output<typeof sugarbushPatchSchema>,
     ): Promise<Sugarbush> {
       const role = await members.roleOf(userId, id);
-      const touchesProfile = patch.profile !== undefined || patch.sunnyAzimuthDeg !== undefined;
+      const touchesProfile =
+        patch.profile !== undefined ||
+        patch.customProfile !== undefined ||
+        patch.sunnyAzimuthDeg !== undefined;
       if (touchesProfile && role !== 'owner') {
         throw new AppError(403, 'forbidden', 'Only the owner may change the guideline profile');
       }
-      const row: Record<string, unknown> = {};
+      const current = await this.get(userId, id);
+      const row: Record<string, unknown> = profileColumns(patch, current);
       if (patch.name !== undefined) row.name = patch.name;
       if (patch.boundary !== undefined)
         row.boundary = patch.boundary ? JSON.stringify(patch.boundary) : null;
-      if (patch.profile !== undefined) row.profile = patch.profile;
       if (patch.sunnyAzimuthDeg !== undefined) row.sunny_azimuth_deg = patch.sunnyAzimuthDeg;
       if (Object.keys(row).length > 0) await repo.update(id, row);
       await audit.record({
