@@ -7,7 +7,7 @@ import { RouteError } from './route-error';
 import { AppShell } from './shell/app-shell';
 import type { SectionHandle } from './shell/sections';
 
-const planned: SectionKey[] = ['map', 'round', 'plan', 'overview', 'notes', 'season', 'settings'];
+const planned: SectionKey[] = ['round', 'overview', 'notes', 'season', 'settings'];
 
 const handle = (section: SectionKey): SectionHandle => ({ section });
 
@@ -51,6 +51,20 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               path: paths.tree.path,
               handle: handle('trees'),
               lazy: async () => ({ Component: (await import('./routes/tree')).TreeRoute }),
+            },
+            {
+              path: paths.plan.path,
+              handle: handle('plan'),
+              lazy: async () => ({
+                Component: (await import('./routes/season-plan')).SeasonPlanRoute,
+              }),
+            },
+            {
+              path: paths.map.path,
+              handle: handle('map'),
+              lazy: async () => ({
+                Component: (await import('./routes/woods-map')).WoodsMapRoute,
+              }),
             },
             ...planned.map((section) => ({
               path: paths[section].path,

@@ -1,0 +1,10 @@
+/** Everything the map reads, under one prefix so an edit can refresh it all at once. */
+export const mapKeys = {
+  all: ['map'] as const,
+  trees: (sugarbushId: number, season?: number) =>
+    [...mapKeys.all, 'trees', sugarbushId, season ?? 'upcoming'] as const,
+  figures: (sugarbushId: number, season?: number) =>
+    [...mapKeys.all, 'figures', sugarbushId, season ?? 'upcoming'] as const,
+  basemaps: (sugarbushId: number) => [...mapKeys.all, 'basemaps', sugarbushId] as const,
+  demoTiles: () => [...mapKeys.all, 'demo-tiles'] as const,
+};

@@ -1,0 +1,124 @@
+import { useState, type FormEvent } from 'react';
+import {
+  species as speciesList,
+  speciesLabels,
+  treeStatuses,
+  treeStatusLabels,
+  type Species,
+  type TreeStatus,
+} from '@shared/schemas/enums';
+import { Button } from '@/components/ui/button';
+import { Field, controlClass } from '@/components/ui/field';
+import type { Tree } from '@shared/schemas/tree';
+import { isApiError } from '@/lib/api-client';
+import { formatNumber } from '@/lib/units';
+import { mapTreeInputSchema, useCreateTree } from '../api/create-tree';
+import type { LatLng } from './move-marker';
+
+/** Tag, species and status for a tree placed on the map at a known spot. */
+export function AddTreeForm({
+  sugarbushId,
+  at,
+  onAdded,
+  onCancel,
+}: {
+  sugarbushId: number;
+  at: LatLng;
+  onAdded: (tree: Tree) => void;
+  onCancel: () => void;
+}) {
+  const create = useCreateTree(sugarbushId);
+  const [tag, setTag] = useState('');
+  const [species, setSpecies] = useState<Species>('sugar-maple');
+  const [status, setStatus] = useState<TreeStatus>('active');
+  const [errors, setErrors] = useState<Record<string, string>>({});
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    const parsed = mapTreeInputSchema.safeParse({ tag, species, status, ...at });
+    if (!parsed.success) {
+      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message])));
+      return;
+    }
+    setErrors({});
+    create.mutate(parsed.data, {
+      onSuccess: onAdded,
+      onError: (error) =>
+        setErrors(
+          isApiError(error)
+            ? (error.fields ?? { form: error.message })
+            : { form: 'The tree could not be added. Try again.' },
+        ),
+    });
+  };
+
+  return (
+    <form
+      onSubmit={submit}
+      aria-label="Add a tree"
+      className="flex flex-col gap-3 rounded border border-rule bg-paper p-4"
+      noValidate
+    >
+      <p className="text-sm text-bark tabular-nums">
+        At {formatNumber(at.lat, 6)}, {formatNumber(at.lng, 6)}
+      </p>
+      <Field label="Tag" error={errors.tag}>
+        {(control) => (
+          <input
+            {...control}
+            value={tag}
+            onChange={(e) => setTag(e.target.value)}
+            autoComplete="off"
+            autoFocus
+            className={controlClass}
+          />
+        )}
+      </Field>
+      <Field label="Species" error={errors.species}>
+        {(control) => (
+          <select
+            {...control}
+            value={species}
+            onChange={(e) => setSpecies(e.target.value as Species)}
+            className={controlClass}
+          >
+            {speciesList.map((s) => (
+              <option key={s} value={s}>
+                {speciesLabels[s]}
+              </option>
+            ))}
+          </select>
+        )}
+      </Field>
+      <Field label="Status" error={errors.status}>
+        {(control) => (
+          <select
+            {...control}
+            value={status}
+            onChange={(e) => setStatus(e.target.value as TreeStatus)}
+            className={controlClass}
+          >
+            {treeStatuses.map((s) => (
+              <option key={s} value={s}>
+                {treeStatusLabels[s]}
+              </option>
+            ))}
+          </select>
+        )}
+      </Field>
+      {errors.form && (
+        <p role="alert" className="text-sm text-alert">
+          {errors.form}
+        </p>
+      )}
+      <div className="flex gap-2">
+        <Button type="submit" variant="primary" disabled={create.isPending} block>
+          {create.isPending ? 'Adding…' : 'Add tree'}
+        </Button>
+        <Button onClick={onCancel} disabled={create.isPending}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}
