@@ -22,7 +22,7 @@ async function main() {
   if (!fs.existsSync(path.join(root, 'dist', 'index.html'))) {
     console.log('Building the client (first start)…');
     const vite = path.join(root, 'node_modules', 'vite', 'bin', 'vite.js');
-    const result = spawnSync(process.execPath, [vite, 'build', '--logLevel', 'warn'], {
+    const result = spawnSync(process.execPath, [vite, 'build', '--logLevel', 'error'], {
       cwd: root,
       stdio: 'inherit',
     });
