@@ -72,15 +72,18 @@ describe('the app shell', () => {
 
   it("lists the user's sugarbushes with their role, and switching keeps the section", async () => {
     const { router, user } = openApp('/sugarbushes/3/map', asRole('forester'));
-    const switcher = await screen.findByLabelText('Sugarbush');
+    // The map page loads Leaflet lazily; give it time on a busy machine.
+    const switcher = await screen.findByLabelText('Sugarbush', {}, { timeout: 10000 });
     expect(
       within(switcher)
         .getAllByRole('option')
         .map((o) => o.textContent),
     ).toEqual(['Hollow Creek — Tapper', 'Upper Lot — Owner']);
     await user.selectOptions(switcher, '8');
-    await waitFor(() => expect(router.state.location.pathname).toBe('/sugarbushes/8/map'));
-  });
+    await waitFor(() => expect(router.state.location.pathname).toBe('/sugarbushes/8/map'), {
+      timeout: 10000,
+    });
+  }, 20000);
 
   it('when a section is not built yet, then it says so calmly', async () => {
     openApp('/sugarbushes/3/notes', asRole('consultant'));

@@ -1,22 +1,17 @@
-import { useParams } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { UnitToggle } from '@/components/ui/unit-toggle';
-import { useSugarbush } from '@/features/sugarbushes/api/get-sugarbush';
 import { TreeRegister } from '@/features/trees/components/tree-register';
 import { formatNumber } from '@/lib/units';
 import { NotFoundRoute } from './not-found';
+import { sugarbushTitle, useSugarbushIdParam } from './sugarbush-param';
 
 export function TreeRegisterRoute() {
-  const { id } = useParams();
-  const sugarbushId = Number(id);
-  const valid = Number.isInteger(sugarbushId) && sugarbushId > 0;
-  const sugarbush = useSugarbush(valid ? sugarbushId : undefined);
-  if (!valid) return <NotFoundRoute />;
+  const { sugarbushId, sugarbush, name } = useSugarbushIdParam();
+  if (sugarbushId === undefined) return <NotFoundRoute />;
 
-  const name = sugarbush.data?.name;
   return (
     <>
-      <title>{name ? `Trees · ${name} · Clearwood` : 'Trees · Clearwood'}</title>
+      <title>{sugarbushTitle('Trees', name)}</title>
       <PageHeader
         title="Trees"
         subtitle={

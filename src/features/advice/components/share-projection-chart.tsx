@@ -1,14 +1,6 @@
-import {
-  CartesianGrid,
-  Line,
-  LineChart,
-  ReferenceLine,
-  ResponsiveContainer,
-  Tooltip,
-  XAxis,
-  YAxis,
-} from 'recharts';
+import { Line, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import type { ProjectedSeason } from '@shared/rules/index';
+import { LineChartFrame, axisProps, lineProps, tooltipStyle } from '@/components/ui/chart-frame';
 import { colors } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 
@@ -49,62 +41,41 @@ export function ShareProjectionChart({
   const summary = `Clear wood ${rate}: ${formatNumber(first.share)} % in ${first.season}, ${formatNumber(last.share)} % in ${last.season}; floor ${formatNumber(floorPct)} %`;
 
   return (
-    <figure>
-      <div role="img" aria-label={summary} className="h-48 w-full">
-        <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={points} margin={{ top: 8, right: 12, bottom: 0, left: 0 }}>
-            <CartesianGrid stroke={colors.rule} vertical={false} />
-            <XAxis
-              dataKey="season"
-              type="number"
-              domain={[first.season, last.season]}
-              tickCount={5}
-              allowDecimals={false}
-              stroke={colors.bark}
-              tick={{ fill: colors.ink, fontSize: 13 }}
-            />
-            <YAxis
-              domain={[bottom, 100]}
-              ticks={ticks}
-              interval={0}
-              width={48}
-              unit=" %"
-              allowDecimals={false}
-              stroke={colors.bark}
-              tick={{ fill: colors.ink, fontSize: 13 }}
-            />
-            <ReferenceLine
-              y={floorPct}
-              stroke={colors.alert}
-              strokeDasharray="5 4"
-              label={{
-                value: `Floor ${formatNumber(floorPct)} %`,
-                position: 'insideBottomRight',
-                fill: colors.alert,
-                fontSize: 13,
-              }}
-            />
-            <Tooltip
-              formatter={(value) => [`${formatNumber(Number(value), 1)} %`, 'Clear wood']}
-              labelFormatter={(season) => `Season ${season}`}
-              contentStyle={{
-                background: colors.paper,
-                borderColor: colors.rule,
-                color: colors.ink,
-              }}
-            />
-            <Line
-              type="monotone"
-              dataKey="share"
-              stroke={colors.moss}
-              strokeWidth={2}
-              dot={false}
-              isAnimationActive={false}
-            />
-          </LineChart>
-        </ResponsiveContainer>
-      </div>
-      <figcaption className="mt-1 text-sm text-bark">{summary}.</figcaption>
-    </figure>
+    <LineChartFrame summary={summary} data={points} height="h-48">
+      <XAxis
+        dataKey="season"
+        type="number"
+        domain={[first.season, last.season]}
+        tickCount={5}
+        allowDecimals={false}
+        {...axisProps(13)}
+      />
+      <YAxis
+        domain={[bottom, 100]}
+        ticks={ticks}
+        interval={0}
+        width={48}
+        unit=" %"
+        allowDecimals={false}
+        {...axisProps(13)}
+      />
+      <ReferenceLine
+        y={floorPct}
+        stroke={colors.alert}
+        strokeDasharray="5 4"
+        label={{
+          value: `Floor ${formatNumber(floorPct)} %`,
+          position: 'insideBottomRight',
+          fill: colors.alert,
+          fontSize: 13,
+        }}
+      />
+      <Tooltip
+        formatter={(value) => [`${formatNumber(Number(value), 1)} %`, 'Clear wood']}
+        labelFormatter={(season) => `Season ${season}`}
+        contentStyle={tooltipStyle}
+      />
+      <Line dataKey="share" stroke={colors.moss} dot={false} {...lineProps} />
+    </LineChartFrame>
   );
 }

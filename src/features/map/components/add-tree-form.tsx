@@ -1,15 +1,10 @@
 import { useState, type FormEvent } from 'react';
-import {
-  species as speciesList,
-  speciesLabels,
-  treeStatuses,
-  treeStatusLabels,
-  type Species,
-  type TreeStatus,
-} from '@shared/schemas/enums';
+import type { Species, TreeStatus } from '@shared/schemas/enums';
+import type { Tree } from '@shared/schemas/tree';
 import { Button } from '@/components/ui/button';
 import { Field, controlClass } from '@/components/ui/field';
-import type { Tree } from '@shared/schemas/tree';
+import { SelectField } from '@/components/ui/select-field';
+import { speciesOptions, statusOptions } from '@/features/trees/tree-options';
 import { isApiError } from '@/lib/api-client';
 import { formatNumber } from '@/lib/units';
 import { mapTreeInputSchema, useCreateTree } from '../api/create-tree';
@@ -74,38 +69,20 @@ export function AddTreeForm({
           />
         )}
       </Field>
-      <Field label="Species" error={errors.species}>
-        {(control) => (
-          <select
-            {...control}
-            value={species}
-            onChange={(e) => setSpecies(e.target.value as Species)}
-            className={controlClass}
-          >
-            {speciesList.map((s) => (
-              <option key={s} value={s}>
-                {speciesLabels[s]}
-              </option>
-            ))}
-          </select>
-        )}
-      </Field>
-      <Field label="Status" error={errors.status}>
-        {(control) => (
-          <select
-            {...control}
-            value={status}
-            onChange={(e) => setStatus(e.target.value as TreeStatus)}
-            className={controlClass}
-          >
-            {treeStatuses.map((s) => (
-              <option key={s} value={s}>
-                {treeStatusLabels[s]}
-              </option>
-            ))}
-          </select>
-        )}
-      </Field>
+      <SelectField
+        label="Species"
+        error={errors.species}
+        value={species}
+        options={speciesOptions}
+        onChange={setSpecies}
+      />
+      <SelectField
+        label="Status"
+        error={errors.status}
+        value={status}
+        options={statusOptions}
+        onChange={setStatus}
+      />
       {errors.form && (
         <p role="alert" className="text-sm text-alert">
           {errors.form}

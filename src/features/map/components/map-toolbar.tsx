@@ -1,19 +1,18 @@
 import { useState, type FormEvent } from 'react';
-import { verdicts, type VerdictKey } from '@shared/rules/verdicts';
-import { warningCodes, type WarningCode } from '@shared/rules/warnings';
-import {
-  species as speciesList,
-  speciesLabels,
-  treeStatuses,
-  treeStatusLabels,
-  type Species,
-  type TreeStatus,
-} from '@shared/schemas/enums';
 import { Button } from '@/components/ui/button';
-import { Field, controlClass } from '@/components/ui/field';
-import { warningLabel } from '@/features/advice/warning-labels';
+import { FilterSelects, type FilterSelectSpec } from '@/components/ui/filter-selects';
+import { SearchInput } from '@/components/ui/search-input';
+import { verdictFilter, warningFilter } from '@/features/advice/advice-options';
+import { speciesFilter, statusFilter } from '@/features/trees/tree-options';
 import { formatNumber } from '@/lib/units';
 import type { MapFilters } from '../lib/map-filters';
+
+const selects: FilterSelectSpec<MapFilters> = {
+  species: speciesFilter,
+  status: statusFilter,
+  verdict: { ...verdictFilter, label: 'Advice', all: 'All advice' },
+  warning: warningFilter,
+};
 
 interface MapToolbarProps {
   filters: MapFilters;
@@ -22,40 +21,6 @@ interface MapToolbarProps {
   onFind: (tag: string) => boolean;
   onStep: (direction: 1 | -1) => void;
   position: { index: number; count: number };
-}
-
-function Select<T extends string>({
-  label,
-  value,
-  all,
-  options,
-  onChange,
-}: {
-  label: string;
-  value: T | undefined;
-  all: string;
-  options: readonly { value: T; label: string }[];
-  onChange: (value: T | undefined) => void;
-}) {
-  return (
-    <Field label={label}>
-      {(control) => (
-        <select
-          {...control}
-          value={value ?? ''}
-          onChange={(e) => onChange((e.target.value || undefined) as T | undefined)}
-          className={controlClass}
-        >
-          <option value="">{all}</option>
-          {options.map((o) => (
-            <option key={o.value} value={o.value}>
-              {o.label}
-            </option>
-          ))}
-        </select>
-      )}
-    </Field>
-  );
 }
 
 /** Finding a tree, narrowing the map down, and stepping from tree to tree. */
@@ -84,15 +49,12 @@ export function MapToolbar({ filters, onFilters, onFind, onStep, position }: Map
             Find tree by tag
           </label>
           <div className="flex gap-2">
-            <input
+            <SearchInput
               id="find-tree"
-              type="search"
               value={tag}
-              onChange={(e) => setTag(e.target.value)}
-              placeholder="e.g. 0412"
-              autoComplete="off"
+              onChange={setTag}
               aria-describedby={missing ? 'find-tree-missing' : undefined}
-              className={`${controlClass} min-w-0 flex-1`}
+              className="min-w-0 flex-1"
             />
             <Button type="submit">Find</Button>
           </div>
@@ -117,34 +79,7 @@ export function MapToolbar({ filters, onFilters, onFind, onStep, position }: Map
           id="map-filters"
           className={`col-span-2 grid-cols-2 gap-3 md:grid md:grid-cols-4 lg:col-span-4 ${open ? 'grid' : 'hidden'}`}
         >
-          <Select<Species>
-            label="Species"
-            value={filters.species}
-            all="All species"
-            options={speciesList.map((s) => ({ value: s, label: speciesLabels[s] }))}
-            onChange={(species) => onFilters({ species })}
-          />
-          <Select<TreeStatus>
-            label="Status"
-            value={filters.status}
-            all="All statuses"
-            options={treeStatuses.map((s) => ({ value: s, label: treeStatusLabels[s] }))}
-            onChange={(status) => onFilters({ status })}
-          />
-          <Select<VerdictKey>
-            label="Advice"
-            value={filters.verdict}
-            all="All advice"
-            options={verdicts.map((v) => ({ value: v.key, label: `${v.letter} · ${v.label}` }))}
-            onChange={(verdict) => onFilters({ verdict })}
-          />
-          <Select<WarningCode>
-            label="Warning"
-            value={filters.warning}
-            all="Any or none"
-            options={warningCodes.map((c) => ({ value: c, label: warningLabel(c) }))}
-            onChange={(warning) => onFilters({ warning })}
-          />
+          <FilterSelects values={filters} selects={selects} onChange={onFilters} />
         </div>
       </div>
       <div className="flex flex-wrap items-center gap-2">

@@ -1,17 +1,14 @@
-import {
-  CartesianGrid,
-  Line,
-  LineChart,
-  ResponsiveContainer,
-  Tooltip,
-  XAxis,
-  YAxis,
-} from 'recharts';
+import { Line, Tooltip, XAxis, YAxis } from 'recharts';
 import type { Measurement } from '@shared/schemas/measurement';
+import { LineChartFrame, axisProps, lineProps, tooltipStyle } from '@/components/ui/chart-frame';
+import { niceTicks } from '@/lib/nice-ticks';
 import { colors } from '@/lib/theme';
 import { formatDate, formatDbh, formatNumber, fromCm, type LengthUnit } from '@/lib/units';
 
 const DAY_MS = 86_400_000;
+
+/** The narrowest DBH axis, in the unit shown: a tree grows slowly, so a flat history stays flat. */
+const MIN_DBH_SPAN = 1;
 
 /** A date as a fractional year, so seasons sit at even spacing on the axis. */
 function yearOf(iso: string): number {
@@ -38,7 +35,9 @@ export function DiameterHistoryChart({ rows, unit }: { rows: Measurement[]; unit
   if (points.length === 0) return null;
   const firstYear = Math.floor(points[0].x);
   const lastYear = Math.max(Math.ceil(points[points.length - 1].x), firstYear + 1);
-  const ticks = Array.from({ length: lastYear - firstYear + 1 }, (_, i) => firstYear + i);
+  const years = Array.from({ length: lastYear - firstYear + 1 }, (_, i) => firstYear + i);
+  const dbhs = points.map((p) => p.dbh);
+  const dbhAxis = niceTicks(Math.min(...dbhs), Math.max(...dbhs), { minSpan: MIN_DBH_SPAN });
   const first = rows[0];
   const last = rows[rows.length - 1];
   const summary =
@@ -47,52 +46,40 @@ export function DiameterHistoryChart({ rows, unit }: { rows: Measurement[]; unit
       : `DBH from ${formatDbh(first.dbhCm, unit)} in ${first.season} to ${formatDbh(last.dbhCm, unit)} in ${last.season}`;
 
   return (
-    <figure className="mt-4">
-      <div role="img" aria-label={summary} className="h-64 w-full">
-        <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={points} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
-            <CartesianGrid stroke={colors.rule} vertical={false} />
-            <XAxis
-              dataKey="x"
-              type="number"
-              domain={[firstYear, lastYear]}
-              ticks={ticks}
-              tickFormatter={(year: number) => String(year)}
-              stroke={colors.bark}
-              tick={{ fill: colors.ink, fontSize: 14 }}
-            />
-            <YAxis
-              dataKey="dbh"
-              domain={['auto', 'auto']}
-              width={56}
-              tickFormatter={(v: number) => formatNumber(v, 1)}
-              stroke={colors.bark}
-              tick={{ fill: colors.ink, fontSize: 14 }}
-              unit={` ${unit}`}
-            />
-            <Tooltip
-              formatter={(value) => [`${formatNumber(Number(value), 1)} ${unit}`, 'DBH']}
-              labelFormatter={(_, payload) =>
-                formatDate((payload?.[0]?.payload as Point | undefined)?.measuredOn)
-              }
-              contentStyle={{
-                background: colors.paper,
-                borderColor: colors.rule,
-                color: colors.ink,
-              }}
-            />
-            <Line
-              type="monotone"
-              dataKey="dbh"
-              stroke={colors.sap}
-              strokeWidth={2}
-              dot={{ r: 3, fill: colors.sap }}
-              isAnimationActive={false}
-            />
-          </LineChart>
-        </ResponsiveContainer>
-      </div>
-      <figcaption className="mt-1 text-sm text-bark">{summary}.</figcaption>
-    </figure>
+    <LineChartFrame
+      summary={summary}
+      data={points}
+      margin={{ top: 8, right: 16, bottom: 8, left: 0 }}
+      height="h-64"
+      className="mt-4"
+    >
+      <XAxis
+        dataKey="x"
+        type="number"
+        domain={[firstYear, lastYear]}
+        ticks={years}
+        tickFormatter={(year: number) => String(year)}
+        {...axisProps(14)}
+      />
+      <YAxis
+        dataKey="dbh"
+        type="number"
+        domain={[dbhAxis.ticks[0], dbhAxis.ticks[dbhAxis.ticks.length - 1]]}
+        ticks={dbhAxis.ticks}
+        interval={0}
+        width={56}
+        tickFormatter={(v: number) => formatNumber(v, dbhAxis.decimals)}
+        {...axisProps(14)}
+        unit={` ${unit}`}
+      />
+      <Tooltip
+        formatter={(value) => [`${formatNumber(Number(value), 1)} ${unit}`, 'DBH']}
+        labelFormatter={(_, payload) =>
+          formatDate((payload?.[0]?.payload as Point | undefined)?.measuredOn)
+        }
+        contentStyle={tooltipStyle}
+      />
+      <Line dataKey="dbh" stroke={colors.sap} dot={{ r: 3, fill: colors.sap }} {...lineProps} />
+    </LineChartFrame>
   );
 }

@@ -1,18 +1,18 @@
-import { useCallback, type ReactNode } from 'react';
-import { Link } from 'react-router';
+import type { ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
-import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
+import { Pager, pageRange } from '@/components/ui/pager';
 import { Skeleton, TableSkeleton } from '@/components/ui/skeleton';
 import { UnitToggle } from '@/components/ui/unit-toggle';
-import { paths } from '@/config/paths';
 import { SeasonStepper } from '@/features/advice/components/season-stepper';
 import { WhyDisclosure } from '@/features/advice/components/why-disclosure';
+import { TreeListEmpty } from '@/features/trees/components/tree-list-empty';
+import { nextSort, toTableSort } from '@/lib/list-search-params';
 import { formatNumber, useUnitSystem } from '@/lib/units';
 import { useSeasonPlan } from '../api/get-season-plan';
 import { PlanFilterBar } from './plan-filters';
-import { nextSort, toTableSort, usePlanSearchParams } from './plan-search-params';
+import { usePlanSearchParams } from './plan-search-params';
 import { PlanTotalsStrip, PlanWarningSummary } from './plan-totals';
 import { SeasonPlanTable } from './season-plan-table';
 
@@ -32,7 +32,6 @@ export function SeasonPlan({
   const { filters, update } = usePlanSearchParams();
   const { system } = useUnitSystem();
   const plan = useSeasonPlan(sugarbushId, filters);
-  const onSearch = useCallback((q: string) => update({ q }, { replace: true }), [update]);
   const filtered = Boolean(filters.q || filters.verdict || filters.warning);
   const data = plan.data;
 
@@ -62,14 +61,7 @@ export function SeasonPlan({
     />
   );
 
-  const filterBar = (
-    <PlanFilterBar
-      filters={filters}
-      onSearch={onSearch}
-      onVerdict={(verdict) => update({ verdict })}
-      onWarning={(warning) => update({ warning })}
-    />
-  );
+  const filterBar = <PlanFilterBar filters={filters} onChange={update} />;
 
   if (plan.isPending) {
     return (
@@ -96,34 +88,17 @@ export function SeasonPlan({
   }
 
   const { items, total, page, pageSize, totals } = data;
-  const first = (page - 1) * pageSize + 1;
-  const last = Math.min(page * pageSize, total);
-  const hasNext = page * pageSize < total;
+  const { first, last } = pageRange(page, pageSize, total);
 
-  let list: ReactNode;
-  if (total === 0 && filtered) {
-    list = (
-      <EmptyState
-        title={filters.q ? `No trees match '${filters.q}'` : 'No trees match these filters'}
-      >
-        <Button
-          variant="quiet"
-          onClick={() => update({ q: undefined, verdict: undefined, warning: undefined })}
-        >
-          Clear search and filters
-        </Button>
-      </EmptyState>
-    );
-  } else if (total === 0) {
-    list = (
-      <EmptyState title="No trees yet — import a CSV or add the first tree on the map">
-        <Link to={paths.map.href(sugarbushId)} className="underline underline-offset-4">
-          Open the map
-        </Link>
-      </EmptyState>
-    );
-  } else {
-    list = (
+  const list =
+    total === 0 ? (
+      <TreeListEmpty
+        sugarbushId={sugarbushId}
+        filtered={filtered}
+        q={filters.q}
+        onClear={() => update({ q: undefined, verdict: undefined, warning: undefined })}
+      />
+    ) : (
       <>
         <p className="mb-2 hidden text-sm print:block">
           Field sheet · {standName} · season {filters.season} · rows {formatNumber(first)}–
@@ -137,25 +112,9 @@ export function SeasonPlan({
           onSort={(field) => update({ sort: nextSort(filters.sort, field) })}
           stale={plan.isPlaceholderData}
         />
-        <nav
-          aria-label="Plan pages"
-          className="mt-4 flex flex-wrap items-center justify-between gap-3"
-        >
-          <p className="tabular-nums" aria-live="polite">
-            {formatNumber(first)}–{formatNumber(last)} of {formatNumber(total)}
-          </p>
-          <div className="flex gap-2">
-            <Button disabled={page <= 1} onClick={() => update({ page: page - 1 })}>
-              Previous
-            </Button>
-            <Button disabled={!hasNext} onClick={() => update({ page: page + 1 })}>
-              Next
-            </Button>
-          </div>
-        </nav>
+        <Pager label="Plan pages" list={data} onPage={(page) => update({ page })} />
       </>
     );
-  }
 
   return (
     <>

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { controlClass } from '@/components/ui/field';
+import { SearchInput } from '@/components/ui/search-input';
 
 const DEBOUNCE_MS = 250;
 
@@ -26,15 +26,7 @@ export function TagSearch({ value, onSearch }: { value: string; onSearch: (q: st
       <label htmlFor="tag-search" className="text-sm font-bold">
         Search by tag
       </label>
-      <input
-        id="tag-search"
-        type="search"
-        value={text}
-        onChange={(event) => setText(event.target.value)}
-        placeholder="e.g. 0412"
-        autoComplete="off"
-        className={controlClass}
-      />
+      <SearchInput id="tag-search" value={text} onChange={setText} />
     </div>
   );
 }

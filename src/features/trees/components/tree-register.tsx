@@ -1,23 +1,16 @@
-import { useCallback } from 'react';
 import { Link } from 'react-router';
 import { speciesLabels } from '@shared/schemas/enums';
 import type { Tree } from '@shared/schemas/tree';
-import { Button } from '@/components/ui/button';
 import { DataTable, type Column } from '@/components/ui/data-table';
-import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
+import { Pager } from '@/components/ui/pager';
 import { TableSkeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
-import {
-  formatDate,
-  formatDbh,
-  formatNumber,
-  formatPercent,
-  useUnitSystem,
-  type LengthUnit,
-} from '@/lib/units';
+import { nextSort, toTableSort } from '@/lib/list-search-params';
+import { formatDate, formatDbh, formatPercent, useUnitSystem, type LengthUnit } from '@/lib/units';
 import { useTrees } from '../api/get-trees';
-import { nextSort, toTableSort, useRegisterSearchParams } from './register-search-params';
+import { useRegisterSearchParams } from './register-search-params';
+import { TreeListEmpty } from './tree-list-empty';
 import { TreeRegisterFilters } from './tree-register-filters';
 import { TreeStatusLabel } from './tree-status';
 
@@ -69,17 +62,9 @@ export function TreeRegister({ sugarbushId }: { sugarbushId: number }) {
   const { filters, update } = useRegisterSearchParams();
   const { unit } = useUnitSystem();
   const trees = useTrees(sugarbushId, filters);
-  const onSearch = useCallback((q: string) => update({ q }, { replace: true }), [update]);
   const filtered = Boolean(filters.q || filters.status || filters.species);
 
-  const filterBar = (
-    <TreeRegisterFilters
-      filters={filters}
-      onSearch={onSearch}
-      onStatus={(status) => update({ status })}
-      onSpecies={(species) => update({ species })}
-    />
-  );
+  const filterBar = <TreeRegisterFilters filters={filters} onChange={update} />;
 
   if (trees.isPending) {
     return (
@@ -102,36 +87,21 @@ export function TreeRegister({ sugarbushId }: { sugarbushId: number }) {
     );
   }
 
-  const { items, total, page, pageSize } = trees.data;
+  const { items, total } = trees.data;
   if (total === 0) {
     return (
       <>
         {filterBar}
-        {filtered ? (
-          <EmptyState
-            title={filters.q ? `No trees match '${filters.q}'` : 'No trees match these filters'}
-          >
-            <Button
-              variant="quiet"
-              onClick={() => update({ q: undefined, status: undefined, species: undefined })}
-            >
-              Clear search and filters
-            </Button>
-          </EmptyState>
-        ) : (
-          <EmptyState title="No trees yet — import a CSV or add the first tree on the map">
-            <Link to={paths.map.href(sugarbushId)} className="underline underline-offset-4">
-              Open the map
-            </Link>
-          </EmptyState>
-        )}
+        <TreeListEmpty
+          sugarbushId={sugarbushId}
+          filtered={filtered}
+          q={filters.q}
+          onClear={() => update({ q: undefined, status: undefined, species: undefined })}
+        />
       </>
     );
   }
 
-  const first = (page - 1) * pageSize + 1;
-  const last = Math.min(page * pageSize, total);
-  const hasNext = page * pageSize < total;
   return (
     <>
       {filterBar}
@@ -145,22 +115,7 @@ export function TreeRegister({ sugarbushId }: { sugarbushId: number }) {
         stale={trees.isPlaceholderData}
         rowClassName={(t) => (t.status === 'removed' ? 'text-bark' : undefined)}
       />
-      <nav
-        aria-label="Register pages"
-        className="mt-4 flex flex-wrap items-center justify-between gap-3"
-      >
-        <p className="tabular-nums" aria-live="polite">
-          {formatNumber(first)}–{formatNumber(last)} of {formatNumber(total)}
-        </p>
-        <div className="flex gap-2">
-          <Button disabled={page <= 1} onClick={() => update({ page: page - 1 })}>
-            Previous
-          </Button>
-          <Button disabled={!hasNext} onClick={() => update({ page: page + 1 })}>
-            Next
-          </Button>
-        </div>
-      </nav>
+      <Pager label="Register pages" list={trees.data} onPage={(page) => update({ page })} />
     </>
   );
 }
