@@ -1,6 +1,7 @@
 /**
- * `npm run bench`: figures for the advisor at scale. Not part of `npm test`; nothing here asserts
- * a time. Prints each figure and its ratio to the time it takes merely to read the rows.
+ * `npm run bench`: figures for the advisor and the woods map at scale. Not part of `npm test`;
+ * nothing here asserts a time. Prints each figure and its ratio to the time it takes merely to
+ * read the rows (the plan) or to fetch the map data (the map). BENCH_MAP=0 skips the map.
  */
 import fs from 'node:fs';
 import os from 'node:os';
@@ -12,6 +13,7 @@ import { createMailer } from '../../server/mail/mailer';
 import { loadStandTrees } from '../../server/modules/plans/plans.repository';
 import { plansService } from '../../server/modules/plans/plans.service';
 import { planStand } from '../../shared/rules/index';
+import { benchMapDraw } from './map-draw';
 import { writeSyntheticStand } from './synthetic-stand';
 
 const TREES = Number(process.env.BENCH_TREES ?? 20_000);
@@ -30,7 +32,8 @@ async function time<T>(fn: () => Promise<T> | T): Promise<{ ms: number; value: T
   return { ms: best, value };
 }
 
-async function main() {
+/** The season plan of a synthetic stand, read and advised on the server side. */
+async function benchPlan() {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'clearwood-bench-'));
   const file = path.join(dir, 'bench.sqlite');
   const config = loadConfig({ NODE_ENV: 'test', DATABASE_FILE: file });
@@ -85,6 +88,11 @@ async function main() {
 
   await db.destroy();
   fs.rmSync(dir, { recursive: true, force: true });
+}
+
+async function main() {
+  await benchPlan();
+  if (process.env.BENCH_MAP !== '0') await benchMapDraw({ trees: TREES, seasons: SEASONS });
 }
 
 main().catch((err) => {

@@ -67,6 +67,9 @@ export function TreeLayer({ trees, selectedId, onSelect }: TreeLayerProps) {
       if (isSelected) selected = marker;
     }
     selected?.bringToFront();
+    // For the map benchmark: every marker is in the group; the canvas paints on the next frame.
+    map.getContainer().dataset.treesDrawn = String(trees.length);
+    performance.mark('clearwood:trees-drawn');
   }, [map, trees]);
 
   // A new selection restyles two markers, not the whole stand.
