@@ -73,6 +73,22 @@ describe("the demo stand's plan for 2027", () => {
     expect(overtapped?.source).toBeTruthy();
   });
 
+  it('answers concurrent requests alike, and a new measurement shows in the very next plan', async () => {
+    const url = `/api/sugarbushes/${standId}/plan?season=2027&pageSize=1`;
+    const answers = await Promise.all([1, 2, 3].map(() => tapper.agent.get(url)));
+    const unmeasured = answers[0].body.totals.unmeasured;
+    expect(answers.map((a) => a.body.totals)).toEqual([0, 1, 2].map(() => answers[0].body.totals));
+    const forester = await signIn(t.app, 'forester@fernside.example', 'maple-demo-2027');
+    const tree = await t.db('trees').where({ sugarbush_id: standId, tag: 'OL-1181' }).first('id');
+    const recorded = await forester.agent
+      .post(`/api/trees/${tree.id}/measurements`)
+      .set('x-csrf-token', forester.csrf)
+      .send({ measuredOn: '2026-11-30', dbhCm: 36.5 });
+    expect(recorded.status).toBe(201);
+    const after = await tapper.agent.get(url);
+    expect(after.body.totals.unmeasured).toBe(unmeasured - 1);
+  });
+
   it('refuses a season that is not a year with 400', async () => {
     const res = await tapper.agent.get(`/api/sugarbushes/${standId}/plan?season=soon`);
     expect(res.status).toBe(400);

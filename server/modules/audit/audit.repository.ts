@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { standChanged } from '../../lib/stand-changes';
 
 export interface AuditEvent {
   sugarbushId: number | null;
@@ -11,14 +12,16 @@ export interface AuditEvent {
 
 export function auditRepository(db: Knex) {
   return {
-    record: (e: AuditEvent) =>
-      db('audit_events').insert({
+    record: (e: AuditEvent) => {
+      if (e.sugarbushId) standChanged(db, e.sugarbushId);
+      return db('audit_events').insert({
         sugarbush_id: e.sugarbushId,
         user_id: e.userId,
         action: e.action,
         entity: e.entity,
         entity_id: e.entityId ?? null,
         detail: e.detail === undefined ? null : JSON.stringify(e.detail),
-      }),
+      });
+    },
   };
 }

@@ -15,6 +15,7 @@ import {
   type StandPlanResponse,
   type TreeAdvice,
 } from '../../../shared/schemas/plan';
+import { shared, standVersion } from '../../lib/stand-changes';
 import { loadStandTrees } from './plans.repository';
 
 const summary = (p: GuidelineProfile): ProfileSummary => ({
@@ -61,6 +62,16 @@ export function plansService(ctx: AppContext) {
     return { profile, sunnyAzimuthDeg: row.sunny_azimuth_deg as number };
   }
 
+  /** The whole stand's plan; concurrent requests on the same record share one computation. */
+  function wholePlan(sugarbushId: number, season: number) {
+    const key = `plan:${sugarbushId}:${season}:${standVersion(ctx.db, sugarbushId)}`;
+    return shared(ctx.db, key, async () => {
+      const { profile, sunnyAzimuthDeg } = await standSettings(sugarbushId);
+      const trees = await loadStandTrees(ctx.db, sugarbushId);
+      return { profile, plan: planStand(trees, { season, profile, sunnyAzimuthDeg }) };
+    });
+  }
+
   return {
     async adviceForTree(
       sugarbushId: number,
@@ -76,9 +87,7 @@ export function plansService(ctx: AppContext) {
 
     async planForStand(sugarbushId: number, q: PlanQuery): Promise<StandPlanResponse> {
       const season = q.season ?? upcomingSeason();
-      const { profile, sunnyAzimuthDeg } = await standSettings(sugarbushId);
-      const trees = await loadStandTrees(ctx.db, sugarbushId);
-      const plan = planStand(trees, { season, profile, sunnyAzimuthDeg });
+      const { profile, plan } = await wholePlan(sugarbushId, season);
       let items = plan.items as PlanItem[];
       if (q.q) items = items.filter((i) => i.tag.toLowerCase().includes(q.q!.toLowerCase()));
       if (q.verdict) items = items.filter((i) => i.verdict === q.verdict);
