@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { QueryClient } from '@tanstack/react-query';
 import type { MeResponse } from '@shared/schemas/auth';
 import type { Role } from '@shared/schemas/enums';
+import { permissions, type Permission as SharedPermission } from '@shared/schemas/permissions';
 import { api, isApiError } from './api-client';
 
 export const authKeys = {
@@ -31,27 +32,16 @@ export const useMe = () => useQuery(meQueryOptions());
 /** Loaders call this: the signed-in user, or null. */
 export const ensureMe = (queryClient: QueryClient) => queryClient.ensureQueryData(meQueryOptions());
 
-export type Permission =
-  | 'read'
-  | 'edit-trees'
-  | 'record-measurements'
-  | 'record-tapholes'
-  | 'write-notes'
-  | 'manage-members';
+/** What a role may do: the shared table the API enforces, plus reading, which every member may. */
+export type Permission = SharedPermission | 'read';
 
-const grants: Record<Permission, readonly Role[]> = {
-  read: ['owner', 'forester', 'tapper', 'consultant'],
-  'edit-trees': ['owner', 'forester'],
-  'record-measurements': ['owner', 'forester'],
-  'record-tapholes': ['owner', 'tapper'],
-  'write-notes': ['owner', 'consultant'],
-  'manage-members': ['owner'],
-};
+const everyone: readonly Role[] = ['owner', 'forester', 'tapper', 'consultant'];
 
-export const rolesFor = (permission: Permission): readonly Role[] => grants[permission];
+export const rolesFor = (permission: Permission): readonly Role[] =>
+  permission === 'read' ? everyone : permissions[permission];
 
 export const can = (role: Role | undefined, permission: Permission): boolean =>
-  role !== undefined && grants[permission].includes(role);
+  role !== undefined && rolesFor(permission).includes(role);
 
 export const roleLabels: Record<Role, string> = {
   owner: 'Owner',

@@ -1,11 +1,13 @@
+import { useState } from 'react';
 import { Link, useParams } from 'react-router';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { paths } from '@/config/paths';
-import { AdviceCard } from '@/features/advice/components/advice-card';
+import { AdviceCard, type AdvisedSpot } from '@/features/advice/components/advice-card';
 import { DiameterHistory } from '@/features/measurements/components/diameter-history';
 import { MeasurementForm } from '@/features/measurements/components/measurement-form';
+import { TapholeForm, type SpotRequest } from '@/features/tapholes/components/taphole-form';
 import { TapholeList } from '@/features/tapholes/components/taphole-list';
 import { useTree } from '@/features/trees/api/get-tree';
 import { TappingCaution } from '@/features/trees/components/tapping-caution';
@@ -19,6 +21,10 @@ export function TreeRoute() {
   const valid = Number.isInteger(treeId) && treeId > 0;
   const tree = useTree(valid ? treeId : undefined);
   const role = useRole(tree.data?.sugarbushId);
+  // "Use this spot" on the advice card fills the taphole form; each click counts as a new request.
+  const [spot, setSpot] = useState<SpotRequest>();
+  const fillSpot = (next: AdvisedSpot) =>
+    setSpot((prev) => ({ ...next, seq: (prev?.seq ?? 0) + 1 }));
 
   if (!valid || (tree.isError && isApiError(tree.error) && tree.error.status === 404)) {
     return (
@@ -50,6 +56,7 @@ export function TreeRoute() {
   }
 
   const canRecord = can(role, 'record-measurements');
+  const canTap = can(role, 'record-tapholes');
   return (
     <>
       <title>{`Tree ${tree.data.tag} · Clearwood`}</title>
@@ -57,7 +64,18 @@ export function TreeRoute() {
       <div className="grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         {/* On a phone the work comes first: the advice, then the form; the record follows. */}
         <div className="flex min-w-0 flex-col gap-6 lg:order-2">
-          <AdviceCard treeId={treeId} caution={<TappingCaution />} />
+          {/* Whoever drills sees the caution beside the taphole form rather than inside the advice. */}
+          <AdviceCard
+            treeId={treeId}
+            caution={canTap ? undefined : <TappingCaution />}
+            onUseSpot={canTap ? fillSpot : undefined}
+          />
+          {canTap && (
+            <>
+              <TappingCaution />
+              <TapholeForm treeId={treeId} sugarbushId={tree.data.sugarbushId} spot={spot} />
+            </>
+          )}
           {canRecord && <MeasurementForm treeId={treeId} />}
         </div>
         <div className="flex min-w-0 flex-col gap-8 lg:order-1">

@@ -67,7 +67,7 @@ export const sections: readonly Section[] = [
     key: 'settings',
     label: 'Settings',
     shortLabel: 'Settings',
-    permission: 'manage-members',
+    permission: 'manage-stand',
     summary: 'The team and their roles, the stand boundary and the tapping guideline.',
   },
 ];

@@ -1,12 +1,14 @@
 import type { ReactNode } from 'react';
 import { useSearchParams } from 'react-router';
+import type { Spot } from '@shared/rules/index';
 import type { TreeAdvice } from '@shared/schemas/plan';
+import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { useTapholes } from '@/features/tapholes/api/get-tapholes';
 import { useUnitSystem } from '@/lib/units';
 import { useTreeAdvice } from '../api/get-tree-advice';
-import { adviceSentence, drillWords } from '../advice-words';
+import { adviceSentence, drillWords, spotWords } from '../advice-words';
 import { parseSeason, seasonParam } from '../season';
 import { holesInReach, profileShape } from '../zone';
 import { AdviceFigures } from './advice-figures';
@@ -35,11 +37,23 @@ function useSeasonSearchParam() {
   return [season, setSeason] as const;
 }
 
+/** An advised spot and the season it is advised for. */
+export type AdvisedSpot = Spot & { season: number };
+
 /**
  * The advisor's answer for one tree and season: how many taps, where, how to drill, and why.
- * `caution` is the safety box shown where the work is advised.
+ * `caution` is the safety box shown where the work is advised; `onUseSpot`, given to those who
+ * record tapholes, offers each advised spot to their form.
  */
-export function AdviceCard({ treeId, caution }: { treeId: number; caution?: ReactNode }) {
+export function AdviceCard({
+  treeId,
+  caution,
+  onUseSpot,
+}: {
+  treeId: number;
+  caution?: ReactNode;
+  onUseSpot?: (spot: AdvisedSpot) => void;
+}) {
   const [season, setSeason] = useSeasonSearchParam();
   const advice = useTreeAdvice(treeId, season);
 
@@ -61,7 +75,9 @@ export function AdviceCard({ treeId, caution }: { treeId: number; caution?: Reac
       />
     );
   } else {
-    body = <AdviceBody advice={advice.data} stale={advice.isPlaceholderData} />;
+    body = (
+      <AdviceBody advice={advice.data} stale={advice.isPlaceholderData} onUseSpot={onUseSpot} />
+    );
   }
 
   return (
@@ -82,7 +98,15 @@ export function AdviceCard({ treeId, caution }: { treeId: number; caution?: Reac
   );
 }
 
-function AdviceBody({ advice, stale }: { advice: TreeAdvice; stale: boolean }) {
+function AdviceBody({
+  advice,
+  stale,
+  onUseSpot,
+}: {
+  advice: TreeAdvice;
+  stale: boolean;
+  onUseSpot?: (spot: AdvisedSpot) => void;
+}) {
   const { system } = useUnitSystem();
   const tapholes = useTapholes(advice.treeId);
   const shape = profileShape(advice.profile.key);
@@ -102,6 +126,32 @@ function AdviceBody({ advice, stale }: { advice: TreeAdvice; stale: boolean }) {
         <p className="mt-2 text-lg font-bold">{adviceSentence(advice, advice.season, system)}</p>
         {advice.taps > 0 && (
           <p className="mt-1">Drill with a {drillWords(advice.bitCm, advice.depthCm, system)}.</p>
+        )}
+        {onUseSpot && advice.placements.length > 0 && (
+          <ul aria-label="Advised spots" className="mt-2 flex flex-col gap-2">
+            {advice.placements.map((spot, i) => {
+              const words = spotWords(spot, system);
+              return (
+                <li
+                  key={`${spot.azimuthDeg}-${spot.heightCm}`}
+                  className="grid grid-cols-[minmax(0,1fr)_auto] items-center gap-x-4"
+                >
+                  <span>
+                    {advice.placements.length > 1 && `${i + 1}. `}
+                    {/* Keep each figure with its unit when the line wraps. */}
+                    {(words[0].toUpperCase() + words.slice(1)).replace(/ (m|in|ft)\b/g, '\u00a0$1')}
+                  </span>
+                  <Button
+                    aria-label={`Use this spot: ${words}`}
+                    disabled={stale}
+                    onClick={() => onUseSpot({ ...spot, season: advice.season })}
+                  >
+                    Use this spot
+                  </Button>
+                </li>
+              );
+            })}
+          </ul>
         )}
       </div>
 

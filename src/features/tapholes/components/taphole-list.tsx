@@ -1,25 +1,39 @@
-import type { Collection } from '@shared/schemas/enums';
 import type { Taphole } from '@shared/schemas/taphole';
 import { DataTable, type Column } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { TableSkeleton } from '@/components/ui/skeleton';
-import { formatBit, formatLength, useUnitSystem, type LengthUnit } from '@/lib/units';
+import { formatBit, formatDate, formatLength, useUnitSystem, type LengthUnit } from '@/lib/units';
 import { useTapholes } from '../api/get-tapholes';
-
-const collectionLabels: Record<Collection, string> = {
-  bucket: 'Bucket',
-  gravity: 'Gravity tubing',
-  vacuum: 'Vacuum tubing',
-};
+import { collectionLabels } from '../lib/collection-labels';
 
 const compass = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];
 /** 200 → "200° SW". */
 export const formatAzimuth = (deg: number) =>
   `${Math.round(deg)}° ${compass[Math.round(deg / 45) % compass.length]}`;
 
+/** "Mar 5" when drilled in the season's own year, else the whole date. */
+const drillDate = (iso: string, season: number) => {
+  const full = formatDate(iso);
+  return iso.startsWith(`${season}-`) ? full.replace(/, \d{4}$/, '') : full;
+};
+
 const columns = (unit: LengthUnit): Column<Taphole>[] => [
-  { key: 'season', header: 'Season', cell: (t) => t.season },
+  {
+    key: 'season',
+    header: 'Season',
+    cell: (t) => (
+      <>
+        {t.season}
+        {t.drilledOn && (
+          <span className="block text-sm text-bark">
+            <span className="sr-only">drilled </span>
+            {drillDate(t.drilledOn, t.season)}
+          </span>
+        )}
+      </>
+    ),
+  },
   {
     key: 'height',
     header: 'Height',
@@ -35,6 +49,11 @@ const columns = (unit: LengthUnit): Column<Taphole>[] => [
   },
   { key: 'bit', header: 'Bit', align: 'right', cell: (t) => formatBit(t.bitCm, unit) },
   { key: 'collection', header: 'Collection', cell: (t) => collectionLabels[t.collection] },
+  {
+    key: 'stain',
+    header: 'Stain',
+    cell: (t) => (t.stainHit === true ? 'Hit' : t.stainHit === false ? 'No' : '—'),
+  },
 ];
 
 /** Every hole drilled in this tree, newest season first. */

@@ -1,0 +1,64 @@
+import {
+  arcDistanceCm,
+  isClearOf,
+  isProfileKey,
+  profiles,
+  validateCustomProfile,
+  type GuidelineProfile,
+  type Spot,
+} from '@shared/rules/index';
+import type { Taphole } from '@shared/schemas/taphole';
+import { holesInReach } from '@/features/advice/zone';
+
+export type SpacingRules = Pick<GuidelineProfile, 'spacing' | 'zone'>;
+
+/** The spacing and zone model of the stand's guideline: a built-in one, or the saved custom set. */
+export function spacingRulesFor(profileKey: string, customProfile: unknown): SpacingRules | null {
+  if (isProfileKey(profileKey)) return profiles[profileKey];
+  const custom = validateCustomProfile(customProfile);
+  return custom.ok ? custom.profile : null;
+}
+
+export interface CrowdedHole {
+  hole: Taphole;
+  /** Bark arc between the two, the short way round. */
+  sidewaysCm: number;
+  /** Positive when the earlier hole is below the new spot. */
+  belowCm: number;
+}
+
+/**
+ * Holes a new hole at `spot` comes too close to: those drilled earlier in the same season, and
+ * those of earlier seasons whose stain it can still reach, nearer than the guideline's spacing
+ * both round the trunk and up or down. Nearest first.
+ */
+export function crowdedHoles(
+  spot: Spot,
+  holes: readonly Taphole[],
+  options: {
+    season: number;
+    dbhCm: number;
+    depthCm: number;
+    radialGrowthCmPerYear: number;
+    rules: SpacingRules;
+  },
+): CrowdedHole[] {
+  const { rules } = options;
+  const circumference = Math.PI * options.dbhCm;
+  const nearby = [
+    ...holes.filter((h) => h.season === options.season),
+    ...holesInReach(holes, { ...options, zone: rules.zone }),
+  ];
+  return nearby
+    .filter((h) => !isClearOf(spot, h, rules.spacing, circumference))
+    .map((hole) => ({
+      hole,
+      sidewaysCm: arcDistanceCm(spot.azimuthDeg, hole.azimuthDeg, circumference),
+      belowCm: spot.heightCm - hole.heightCm,
+    }))
+    .sort(
+      (a, b) =>
+        Math.hypot(a.sidewaysCm, a.belowCm) - Math.hypot(b.sidewaysCm, b.belowCm) ||
+        b.hole.season - a.hole.season,
+    );
+}
