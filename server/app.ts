@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import { ConnectSessionKnexStore } from 'connect-session-knex';
 import { doubleCsrf } from 'csrf-csrf';
@@ -45,6 +46,12 @@ export function createApp(opts: AppOptions) {
         },
       },
       strictTransportSecurity: config.COOKIE_SECURE,
+    }),
+  );
+  // Large answers (a whole stand's map data) shrink several-fold; tiles are already compressed.
+  app.use(
+    compression({
+      filter: (req, res) => !req.path.startsWith('/api/basemaps/') && compression.filter(req, res),
     }),
   );
   app.use(express.json({ limit: '1mb' }));

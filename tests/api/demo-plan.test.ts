@@ -89,6 +89,15 @@ describe("the demo stand's plan for 2027", () => {
     expect(after.body.totals.unmeasured).toBe(unmeasured - 1);
   });
 
+  it("sends the whole stand's map data compressed when the client accepts it", async () => {
+    const res = await tapper.agent
+      .get(`/api/sugarbushes/${standId}/map?season=2027`)
+      .set('accept-encoding', 'gzip');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBe('gzip');
+    expect(res.body.trees.length).toBeGreaterThan(1000);
+  });
+
   it('refuses a season that is not a year with 400', async () => {
     const res = await tapper.agent.get(`/api/sugarbushes/${standId}/plan?season=soon`);
     expect(res.status).toBe(400);
