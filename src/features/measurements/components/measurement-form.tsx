@@ -1,6 +1,5 @@
 import { useId, useState, type FormEvent } from 'react';
 import { crownDiebackClasses } from '@shared/schemas/measurement';
-import { Button } from '@/components/ui/button';
 import { Field, controlClass } from '@/components/ui/field';
 import { cn } from '@/components/ui/cn';
 import { isApiError } from '@/lib/api-client';
@@ -13,6 +12,7 @@ import {
   type MeasurementErrors,
   type MeasurementFormValues,
 } from './measurement-form-values';
+import { FormFooter } from '@/components/ui/form-footer';
 
 const modeLabels: Record<MeasureMode, string> = {
   diameter: 'Diameter',
@@ -187,25 +187,12 @@ export function MeasurementForm({ treeId }: { treeId: number }) {
           )}
         </Field>
 
-        {formError && (
-          <p role="alert" className="text-alert">
-            {formError}
-          </p>
-        )}
-        <div className="flex flex-wrap items-center gap-4">
-          <Button
-            type="submit"
-            variant="primary"
-            block
-            disabled={create.isPending}
-            aria-busy={create.isPending || undefined}
-          >
-            Save measurement
-          </Button>
-          <p role="status" className="text-moss">
-            {saved}
-          </p>
-        </div>
+        <FormFooter
+          error={formError}
+          pending={create.isPending}
+          label="Save measurement"
+          notice={saved}
+        />
       </form>
     </section>
   );

@@ -1,6 +1,5 @@
 import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { collections, type Collection } from '@shared/schemas/enums';
-import { Button } from '@/components/ui/button';
 import { Field, controlClass } from '@/components/ui/field';
 import { cn } from '@/components/ui/cn';
 import { compassWord, formatHeight } from '@/features/advice/advice-words';
@@ -23,6 +22,7 @@ import {
   type TapholeFormValues,
 } from './taphole-form-values';
 import { useDrillingContext } from './use-drilling-context';
+import { FormFooter } from '@/components/ui/form-footer';
 
 /** An advised spot handed to the form; each new `seq` fills it in again. */
 export interface SpotRequest {
@@ -213,25 +213,12 @@ export function TapholeForm({
           {errors.stainHit && <p className="text-sm text-alert">{errors.stainHit}</p>}
         </div>
 
-        {formError && (
-          <p role="alert" className="text-alert">
-            {formError}
-          </p>
-        )}
-        <div className="flex flex-wrap items-center gap-4">
-          <Button
-            type="submit"
-            variant="primary"
-            block
-            disabled={create.isPending}
-            aria-busy={create.isPending || undefined}
-          >
-            Save taphole
-          </Button>
-          <p role="status" className="text-moss">
-            {notice}
-          </p>
-        </div>
+        <FormFooter
+          error={formError}
+          pending={create.isPending}
+          label="Save taphole"
+          notice={notice}
+        />
       </form>
     </section>
   );
