@@ -30,6 +30,19 @@ export const paths = {
     href: (next?: string) =>
       withSearch('/sign-in', { next: next && next !== '/' ? next : undefined }),
   },
+  /** `?token=` finishes a sign-up from the mailed link. */
+  signUp: { path: '/sign-up', href: (token?: string) => withSearch('/sign-up', { token }) },
+  forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
+  resetPassword: {
+    path: '/reset-password',
+    href: (token?: string) => withSearch('/reset-password', { token }),
+  },
+  invitation: {
+    path: '/invitations/:token',
+    href: (token: string) => `/invitations/${encodeURIComponent(token)}`,
+  },
+  /** A signed-in person with no stand yet starts one here. */
+  newSugarbush: { path: '/sugarbushes/new', href: () => '/sugarbushes/new' },
   trees: sugarbushSection('trees'),
   tree: {
     path: '/trees/:treeId',
