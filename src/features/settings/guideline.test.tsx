@@ -1,4 +1,5 @@
-import { screen, waitFor, within } from '@testing-library/react';
+import { configure, screen, waitFor, within } from '@testing-library/react';
+import { vi } from 'vitest';
 import { profiles } from '@shared/rules/index';
 import type { GuidelinePreviewInput } from '@shared/schemas/guideline-preview';
 import { upcomingSeason } from '@shared/schemas/plan';
@@ -9,6 +10,10 @@ import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, page, sugarbush } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
 import { guidelinePreview, invitation, team } from './settings-fixtures';
+
+// The page reads the stand, the user and the team before it shows; a busy machine is slow at it.
+configure({ asyncUtilTimeout: 5000 });
+vi.setConfig({ testTimeout: 20_000 });
 
 const PREVIEW = 'POST /api/sugarbushes/3/guideline-preview';
 const PATCH = 'PATCH /api/sugarbushes/3';

@@ -1,4 +1,5 @@
-import { screen, waitFor, within } from '@testing-library/react';
+import { configure, screen, waitFor, within } from '@testing-library/react';
+import { vi } from 'vitest';
 import { profiles } from '@shared/rules/index';
 import type { Role } from '@shared/schemas/enums';
 import { permissionLabels } from '@shared/schemas/permissions';
@@ -8,6 +9,10 @@ import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, page, sugarbush } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
 import { invitation, team } from './settings-fixtures';
+
+// The page reads the stand, the user and the team before it shows; a busy machine is slow at it.
+configure({ asyncUtilTimeout: 5000 });
+vi.setConfig({ testTimeout: 20_000 });
 
 const STAND = 'GET /api/sugarbushes/3';
 const PATCH = 'PATCH /api/sugarbushes/3';
@@ -60,6 +65,8 @@ describe('the settings page for a member who is not the owner', () => {
     );
     expect(within(inUse).getByText(`Source: ${profiles.conservative.source}`)).toBeVisible();
     expect(within(guideline).queryByRole('button', { name: /See what this changes/ })).toBeNull();
+    // No figures of the stand's own saved yet: nothing to list for them.
+    expect(within(guideline).queryByText('Your own figures')).not.toBeInTheDocument();
 
     const teamRegion = await region('The team');
     const robin = await within(teamRegion).findByRole('listitem', { name: 'Robin Ash' });
@@ -69,6 +76,33 @@ describe('the settings page for a member who is not the owner', () => {
     expect(screen.queryByRole('button', { name: 'Send the invitation' })).not.toBeInTheDocument();
     // Invitations are the owner's: a forester's page never asks for them.
     expect(api.to(INVITATIONS)).toHaveLength(0);
+  });
+
+  it('when the stand follows its own saved guideline, then a consultant reads it in use with its table in centimetres and its source', async () => {
+    const { user } = openSettingsAs('consultant', {
+      [STAND]: sugarbush({
+        role: 'consultant',
+        profile: 'custom',
+        customProfile: {
+          key: 'custom',
+          label: 'Hollow Creek rule',
+          unit: 'in',
+          bands: [
+            { from: 14, taps: 1 },
+            { from: 20, taps: 2 },
+          ],
+          spacing: { sidewaysCm: 10, verticalCm: 30 },
+          source: 'Our consulting forester, 2026',
+        },
+      }),
+    });
+    const guideline = await region('The guideline');
+    expect(guideline).toHaveTextContent('This sugarbush follows Hollow Creek rule.');
+    const inUse = within(guideline).getByRole('listitem', { current: true });
+    expect(inUse).toHaveTextContent('Your own: Hollow Creek rule');
+    expect(inUse).toHaveTextContent('1 tap from 35.6 cm, 2 taps from 50.8 cm');
+    await user.click(within(inUse).getByRole('button', { name: /^Why\?/ }));
+    expect(within(inUse).getByText('Source: Our consulting forester, 2026')).toBeVisible();
   });
 
   it('when the owner opens Settings, then there is no who-can-change note and the forms are there', async () => {

@@ -1,10 +1,15 @@
-import { screen, waitFor, within } from '@testing-library/react';
+import { configure, screen, waitFor, within } from '@testing-library/react';
+import { vi } from 'vitest';
 import type { InvitationInput } from '@shared/schemas/invitation';
 import { SettingsRoute } from '@/app/routes/settings';
 import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, page, sugarbush } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
 import { invitation, member, team } from './settings-fixtures';
+
+// The page reads the stand, the user and the team before it shows; a busy machine is slow at it.
+configure({ asyncUtilTimeout: 5000 });
+vi.setConfig({ testTimeout: 20_000 });
 
 const MEMBERS = 'GET /api/sugarbushes/3/members';
 const INVITATIONS = 'GET /api/sugarbushes/3/invitations';

@@ -64,7 +64,10 @@ export function ProfileChoices({
   onChoose?: (key: string) => void;
 }) {
   const baseId = useId();
-  const choices = choicesFor(saved, unit);
+  // Reading only, the stand's own figures are listed once there are some.
+  const choices = choicesFor(saved, unit).filter(
+    (c) => onChoose || saved || c.key !== CUSTOM_PROFILE_KEY,
+  );
   if (!onChoose) {
     return (
       <ul aria-label="Guidelines" className="flex flex-col gap-2">
