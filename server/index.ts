@@ -10,7 +10,9 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   await migrateLatest(db);
   const app = createApp({ config, db });
   const server = await new Promise<Server>((resolve, reject) => {
-    const s = app.listen(config.PORT, () => resolve(s));
+    const s = config.HOST
+      ? app.listen(config.PORT, config.HOST, () => resolve(s))
+      : app.listen(config.PORT, () => resolve(s));
     s.on('error', reject);
   });
   const address = server.address();
@@ -18,9 +20,10 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const url = `http://localhost:${port}`;
   const close = async () => {
     await new Promise<void>((resolve) => server.close(() => resolve()));
+    await app.ctx.background.idle();
     await db.destroy();
   };
-  return { config, db, server, url, close };
+  return { config, db, server, url, close, ctx: app.ctx };
 }
 
 export function exitOnConfigError(err: unknown): never {

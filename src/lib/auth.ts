@@ -59,12 +59,7 @@ export const rolesFor = (permission: Permission): readonly Role[] =>
 export const can = (role: Role | undefined, permission: Permission): boolean =>
   role !== undefined && rolesFor(permission).includes(role);
 
-export const roleLabels: Record<Role, string> = {
-  owner: 'Owner',
-  forester: 'Forester',
-  tapper: 'Tapper',
-  consultant: 'Consultant',
-};
+export { roleLabels } from '@shared/schemas/enums';
 
 /** The user's role in one sugarbush, or undefined while unknown or when not a member. */
 export function useRole(sugarbushId: number | undefined): Role | undefined {
