@@ -58,7 +58,8 @@ export function createApp(opts: AppOptions) {
           'default-src': ["'self'"],
           'base-uri': ["'self'"],
           'connect-src': ["'self'"],
-          'font-src': ["'self'"],
+          // Vite inlines the smallest font subsets as data: URLs.
+          'font-src': ["'self'", 'data:'],
           'form-action': ["'self'"],
           'frame-ancestors': ["'none'"],
           'img-src': ["'self'", 'data:', 'blob:'],

@@ -18,6 +18,8 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : config.PORT;
   const url = `http://localhost:${port}`;
+  // A free port picked at start (PORT=0) is the one mailed links must name.
+  if (!env.APP_URL && config.PORT === 0) config.appUrl = url;
   const close = async () => {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await app.ctx.background.idle();

@@ -77,9 +77,11 @@ export function membersRepository(db: Knex) {
       return row ? toMember(row) : undefined;
     },
 
-    async ownerCount(sugarbushId: number): Promise<number> {
+    /** Members whose role is one of these. */
+    async countWithRole(sugarbushId: number, roles: readonly Role[]): Promise<number> {
       const [{ n }] = await db('memberships')
-        .where({ sugarbush_id: sugarbushId, role: 'owner' })
+        .where({ sugarbush_id: sugarbushId })
+        .whereIn('role', roles)
         .count({ n: '*' });
       return Number(n);
     },

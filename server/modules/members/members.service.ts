@@ -5,6 +5,7 @@ import { pageOf } from '../../lib/paging';
 import { auditRepository } from '../audit/audit.repository';
 import type { Page } from '../../../shared/schemas/list-query';
 import type { Member, MemberPatch } from '../../../shared/schemas/members';
+import { can, permissions } from '../../../shared/schemas/permissions';
 import { membersRepository, type MemberSort } from './members.repository';
 
 export interface MemberListQuery {
@@ -13,6 +14,9 @@ export interface MemberListQuery {
   q?: string;
   sort?: `${'' | '-'}${MemberSort}`;
 }
+
+/** The roles that can manage the team: a stand always keeps at least one member holding one. */
+const managers = permissions['manage-members'];
 
 const lastOwner = () =>
   new AppError(
@@ -39,8 +43,8 @@ export function membersService(ctx: AppContext) {
         const members = membersRepository(trx);
         const member = await members.find(access.sugarbushId, userId);
         if (!member) throw notFound('Member');
-        if (member.role === 'owner' && patch.role !== 'owner') {
-          if ((await members.ownerCount(access.sugarbushId)) <= 1) throw lastOwner();
+        if (can(member.role, 'manage-members') && !can(patch.role, 'manage-members')) {
+          if ((await members.countWithRole(access.sugarbushId, managers)) <= 1) throw lastOwner();
         }
         await members.setRole(access.sugarbushId, userId, patch.role);
         return member;
@@ -61,7 +65,10 @@ export function membersService(ctx: AppContext) {
         const members = membersRepository(trx);
         const member = await members.find(access.sugarbushId, userId);
         if (!member) throw notFound('Member');
-        if (member.role === 'owner' && (await members.ownerCount(access.sugarbushId)) <= 1)
+        if (
+          can(member.role, 'manage-members') &&
+          (await members.countWithRole(access.sugarbushId, managers)) <= 1
+        )
           throw lastOwner();
         await members.remove(access.sugarbushId, userId);
         return member;

@@ -39,6 +39,7 @@ function openAsOwner(
     path: '/sugarbushes/:id/settings',
     url: '/sugarbushes/3/settings',
     element: <SettingsRoute />,
+    strict: true,
   });
   return { api, ...view };
 }

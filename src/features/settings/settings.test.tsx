@@ -34,6 +34,7 @@ function openSettingsAs(role: Role, routes: Record<string, unknown> = {}) {
     path: '/sugarbushes/:id/settings',
     url: '/sugarbushes/3/settings',
     element: <SettingsRoute />,
+    strict: true,
   });
   return { api, ...view };
 }
@@ -113,21 +114,21 @@ describe('the settings page for a member who is not the owner', () => {
   });
 
   it('when the stand cannot be loaded, then the page says so and a retry asks again', async () => {
-    let calls = 0;
+    let failing = true;
     const { api, user } = openSettingsAs('owner', {
-      [STAND]: (() => {
-        calls += 1;
-        return calls === 1
+      [STAND]: (() =>
+        failing
           ? { status: 500, body: { error: { code: 'server', message: 'Database busy' } } }
-          : { status: 200, body: sugarbush({ role: 'owner' }) };
-      }) satisfies Handler,
+          : { status: 200, body: sugarbush({ role: 'owner' }) }) satisfies Handler,
     });
     expect(
       await screen.findByText("We couldn't load this sugarbush's settings."),
     ).toBeInTheDocument();
+    const failedReads = api.to(STAND).length;
+    failing = false;
     await user.click(screen.getByRole('button', { name: 'Retry' }));
     expect(await screen.findByRole('textbox', { name: 'Name' })).toHaveValue('Hollow Creek');
-    expect(api.to(STAND).length).toBeGreaterThanOrEqual(2);
+    expect(api.to(STAND).length).toBeGreaterThan(failedReads);
   });
 });
 
@@ -161,6 +162,7 @@ describe('the stand form', () => {
     await user.type(name, 'Hollow Creek East');
     await user.selectOptions(screen.getByRole('combobox', { name: 'Compass point' }), 'SE');
     expect(screen.getByRole('textbox', { name: 'Degrees' })).toHaveValue('135');
+    const standReads = api.to(STAND).length;
     await user.click(screen.getByRole('button', { name: 'Save the stand' }));
 
     await waitFor(() => expect(api.to(PATCH)).toHaveLength(1));
@@ -169,7 +171,7 @@ describe('the stand form', () => {
       await screen.findByText('Saved. The season plan follows the new sunny side.'),
     ).toBeInTheDocument();
     for (const key of cached) expect(queryClient.getQueryState(key)?.isInvalidated).toBe(true);
-    await waitFor(() => expect(api.to(STAND).length).toBeGreaterThanOrEqual(2));
+    await waitFor(() => expect(api.to(STAND).length).toBeGreaterThan(standReads));
   });
 
   it('when the owner types exact degrees between points, then the compass shows none and the degrees are sent', async () => {

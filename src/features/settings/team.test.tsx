@@ -33,6 +33,7 @@ function openTeam(routes: Record<string, unknown> = {}) {
     path: '/sugarbushes/:id/settings',
     url: '/sugarbushes/3/settings',
     element: <SettingsRoute />,
+    strict: true,
   });
   return { api, ...view };
 }

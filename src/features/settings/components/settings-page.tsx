@@ -6,7 +6,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { UnitToggle } from '@/components/ui/unit-toggle';
 import { paths } from '@/config/paths';
 import { can, useMe } from '@/lib/auth';
-import { compassPointWords, nearestPoint } from '@/lib/compass';
+import { nearestCompassPoint } from '@/lib/compass';
 import { formatNumber } from '@/lib/units';
 import { GuidelineSection } from './guideline-section';
 import { InvitationList } from './invitation-list';
@@ -27,8 +27,7 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
-const sunnySide = (deg: number) =>
-  `${compassPointWords[nearestPoint(deg)]} (${formatNumber(deg)}°)`;
+const sunnySide = (deg: number) => `${nearestCompassPoint(deg).word} (${formatNumber(deg)}°)`;
 
 function StandFacts({ stand }: { stand: Sugarbush }) {
   return (

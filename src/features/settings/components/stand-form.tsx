@@ -5,7 +5,7 @@ import type { Sugarbush } from '@shared/schemas/sugarbush';
 import { cn } from '@/components/ui/cn';
 import { Field, controlClass } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
-import { compassPointWords, compassPoints, exactPoint, pointDeg } from '@/lib/compass';
+import { compassChoiceLabel, compassPoints, exactPoint } from '@/lib/compass';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUnitSystem } from '@/lib/units';
 import {
@@ -76,11 +76,11 @@ export function StandForm({ stand }: { stand: Sugarbush }) {
             {(control) => (
               <select
                 {...control}
-                value={point ?? ''}
+                value={point?.key ?? ''}
                 onChange={(e) => {
-                  const chosen = compassPoints.find((p) => p === e.target.value);
+                  const chosen = compassPoints.find((p) => p.key === e.target.value);
                   if (chosen)
-                    setValue('sunnyAzimuthDeg', pointDeg(chosen), {
+                    setValue('sunnyAzimuthDeg', chosen.deg, {
                       shouldDirty: true,
                       shouldValidate: isSubmitted,
                     });
@@ -91,8 +91,8 @@ export function StandForm({ stand }: { stand: Sugarbush }) {
                   Between points (see degrees)
                 </option>
                 {compassPoints.map((p) => (
-                  <option key={p} value={p}>
-                    {compassPointWords[p]} ({pointDeg(p)}°)
+                  <option key={p.key} value={p.key}>
+                    {compassChoiceLabel(p)}
                   </option>
                 ))}
               </select>
