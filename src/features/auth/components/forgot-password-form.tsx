@@ -1,8 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Button } from '@/components/ui/button';
-import { Field, controlClass } from '@/components/ui/field';
+import { FormSubmit } from '@/components/ui/form-submit';
+import { TextField } from '@/components/ui/text-field';
 import { PublicPage } from '@/components/ui/public-page';
 import { TextLink } from '@/components/ui/text-link';
 import { paths } from '@/config/paths';
@@ -51,32 +51,15 @@ export function ForgotPasswordForm() {
       lead="Enter the e-mail you sign in with and we'll send you a link to choose a new password."
     >
       <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
-        <Field label="E-mail" error={errors.email?.message}>
-          {(control) => (
-            <input
-              {...control}
-              {...form.register('email')}
-              type="email"
-              autoComplete="username"
-              inputMode="email"
-              className={controlClass}
-            />
-          )}
-        </Field>
-        {formError && (
-          <p role="alert" className="text-alert">
-            {formError}
-          </p>
-        )}
-        <Button
-          type="submit"
-          variant="primary"
-          className="w-full"
-          disabled={request.isPending}
-          aria-busy={request.isPending || undefined}
-        >
-          Send the link
-        </Button>
+        <TextField
+          label="E-mail"
+          error={errors.email?.message}
+          {...form.register('email')}
+          type="email"
+          autoComplete="username"
+          inputMode="email"
+        />
+        <FormSubmit error={formError} pending={request.isPending} label="Send the link" />
       </form>
       <TextLink to={paths.signIn.href()}>Back to sign in</TextLink>
     </PublicPage>

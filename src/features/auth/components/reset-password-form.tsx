@@ -1,8 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Button } from '@/components/ui/button';
-import { Field, controlClass } from '@/components/ui/field';
+import { FormSubmit } from '@/components/ui/form-submit';
+import { TextField } from '@/components/ui/text-field';
 import { PublicPage } from '@/components/ui/public-page';
 import { ActionLink, TextLink } from '@/components/ui/text-link';
 import { paths } from '@/config/paths';
@@ -66,42 +66,22 @@ export function ResetPasswordForm({ token }: { token: string }) {
   return (
     <PublicPage title="Choose a new password">
       <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
-        <Field label="New password" hint="At least 10 characters." error={errors.password?.message}>
-          {(control) => (
-            <input
-              {...control}
-              {...form.register('password')}
-              type="password"
-              autoComplete="new-password"
-              className={controlClass}
-            />
-          )}
-        </Field>
-        <Field label="New password again" error={errors.passwordAgain?.message}>
-          {(control) => (
-            <input
-              {...control}
-              {...form.register('passwordAgain')}
-              type="password"
-              autoComplete="new-password"
-              className={controlClass}
-            />
-          )}
-        </Field>
-        {formError && (
-          <p role="alert" className="text-alert">
-            {formError}
-          </p>
-        )}
-        <Button
-          type="submit"
-          variant="primary"
-          className="w-full"
-          disabled={reset.isPending}
-          aria-busy={reset.isPending || undefined}
-        >
-          Save the new password
-        </Button>
+        <TextField
+          label="New password"
+          hint="At least 10 characters."
+          error={errors.password?.message}
+          {...form.register('password')}
+          type="password"
+          autoComplete="new-password"
+        />
+        <TextField
+          label="New password again"
+          error={errors.passwordAgain?.message}
+          {...form.register('passwordAgain')}
+          type="password"
+          autoComplete="new-password"
+        />
+        <FormSubmit error={formError} pending={reset.isPending} label="Save the new password" />
       </form>
     </PublicPage>
   );

@@ -2,8 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { MeResponse } from '@shared/schemas/auth';
-import { Button } from '@/components/ui/button';
-import { Field, controlClass } from '@/components/ui/field';
+import { FormSubmit } from '@/components/ui/form-submit';
+import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { loginSchema, useLogin } from '../api/login';
 import { accountErrorMessage } from './auth-messages';
@@ -31,43 +31,22 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (me: MeResponse) => voi
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
-      <Field label="E-mail" error={errors.email?.message}>
-        {(control) => (
-          <input
-            {...control}
-            {...form.register('email')}
-            type="email"
-            autoComplete="username"
-            inputMode="email"
-            className={controlClass}
-          />
-        )}
-      </Field>
-      <Field label="Password" error={errors.password?.message}>
-        {(control) => (
-          <input
-            {...control}
-            {...form.register('password')}
-            type="password"
-            autoComplete="current-password"
-            className={controlClass}
-          />
-        )}
-      </Field>
-      {formError && (
-        <p role="alert" className="text-alert">
-          {formError}
-        </p>
-      )}
-      <Button
-        type="submit"
-        variant="primary"
-        className="w-full"
-        disabled={login.isPending}
-        aria-busy={login.isPending || undefined}
-      >
-        Sign in
-      </Button>
+      <TextField
+        label="E-mail"
+        error={errors.email?.message}
+        {...form.register('email')}
+        type="email"
+        autoComplete="username"
+        inputMode="email"
+      />
+      <TextField
+        label="Password"
+        error={errors.password?.message}
+        {...form.register('password')}
+        type="password"
+        autoComplete="current-password"
+      />
+      <FormSubmit error={formError} pending={login.isPending} label="Sign in" />
     </form>
   );
 }

@@ -2,7 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
-import { Field, controlClass } from '@/components/ui/field';
+import { FormSubmit } from '@/components/ui/form-submit';
+import { TextField } from '@/components/ui/text-field';
 import { PublicPage } from '@/components/ui/public-page';
 import { TextLink } from '@/components/ui/text-link';
 import { paths } from '@/config/paths';
@@ -66,54 +67,30 @@ export function SignUpForm() {
       lead="Keep a record of every tree you tap, season after season."
     >
       <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
-        <Field label="Your name" error={errors.name?.message}>
-          {(control) => (
-            <input
-              {...control}
-              {...form.register('name')}
-              type="text"
-              autoComplete="name"
-              className={controlClass}
-            />
-          )}
-        </Field>
-        <Field label="E-mail" error={errors.email?.message}>
-          {(control) => (
-            <input
-              {...control}
-              {...form.register('email')}
-              type="email"
-              autoComplete="email"
-              inputMode="email"
-              className={controlClass}
-            />
-          )}
-        </Field>
-        <Field label="Password" hint="At least 10 characters." error={errors.password?.message}>
-          {(control) => (
-            <input
-              {...control}
-              {...form.register('password')}
-              type="password"
-              autoComplete="new-password"
-              className={controlClass}
-            />
-          )}
-        </Field>
-        {formError && (
-          <p role="alert" className="text-alert">
-            {formError}
-          </p>
-        )}
-        <Button
-          type="submit"
-          variant="primary"
-          className="w-full"
-          disabled={registration.isPending}
-          aria-busy={registration.isPending || undefined}
-        >
-          Create account
-        </Button>
+        <TextField
+          label="Your name"
+          error={errors.name?.message}
+          {...form.register('name')}
+          type="text"
+          autoComplete="name"
+        />
+        <TextField
+          label="E-mail"
+          error={errors.email?.message}
+          {...form.register('email')}
+          type="email"
+          autoComplete="email"
+          inputMode="email"
+        />
+        <TextField
+          label="Password"
+          hint="At least 10 characters."
+          error={errors.password?.message}
+          {...form.register('password')}
+          type="password"
+          autoComplete="new-password"
+        />
+        <FormSubmit error={formError} pending={registration.isPending} label="Create account" />
       </form>
       <TextLink to={paths.signIn.href()}>Already have an account? Sign in</TextLink>
     </PublicPage>

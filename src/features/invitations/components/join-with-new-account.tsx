@@ -5,8 +5,8 @@ import {
   acceptInvitationFormSchema,
   type AcceptInvitationAnswer,
 } from '@shared/schemas/invitation';
-import { Button } from '@/components/ui/button';
-import { Field, controlClass } from '@/components/ui/field';
+import { FormSubmit } from '@/components/ui/form-submit';
+import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useAcceptInvitation } from '../api/accept-invitation';
 import { acceptErrorMessage } from './accept-error';
@@ -54,53 +54,29 @@ export function JoinWithNewAccount({
         <h2 className="text-lg font-bold">Make your account</h2>
         <p className="mt-1 text-bark">You will sign in with {email}.</p>
       </div>
-      <Field label="Your name" error={errors.name?.message}>
-        {(control) => (
-          <input
-            {...control}
-            {...form.register('name')}
-            type="text"
-            autoComplete="name"
-            className={controlClass}
-          />
-        )}
-      </Field>
-      <Field label="Password" hint="At least 10 characters." error={errors.password?.message}>
-        {(control) => (
-          <input
-            {...control}
-            {...form.register('password')}
-            type="password"
-            autoComplete="new-password"
-            className={controlClass}
-          />
-        )}
-      </Field>
-      <Field label="Password again" error={errors.passwordAgain?.message}>
-        {(control) => (
-          <input
-            {...control}
-            {...form.register('passwordAgain')}
-            type="password"
-            autoComplete="new-password"
-            className={controlClass}
-          />
-        )}
-      </Field>
-      {formError && (
-        <p role="alert" className="text-alert">
-          {formError}
-        </p>
-      )}
-      <Button
-        type="submit"
-        variant="primary"
-        className="w-full"
-        disabled={accept.isPending}
-        aria-busy={accept.isPending || undefined}
-      >
-        Create account and join
-      </Button>
+      <TextField
+        label="Your name"
+        error={errors.name?.message}
+        {...form.register('name')}
+        type="text"
+        autoComplete="name"
+      />
+      <TextField
+        label="Password"
+        hint="At least 10 characters."
+        error={errors.password?.message}
+        {...form.register('password')}
+        type="password"
+        autoComplete="new-password"
+      />
+      <TextField
+        label="Password again"
+        error={errors.passwordAgain?.message}
+        {...form.register('passwordAgain')}
+        type="password"
+        autoComplete="new-password"
+      />
+      <FormSubmit error={formError} pending={accept.isPending} label="Create account and join" />
     </form>
   );
 }
