@@ -3,6 +3,7 @@ import { get, useFieldArray, type Path, type UseFormReturn } from 'react-hook-fo
 import { CUSTOM_LIMITS, profileKeys, profiles } from '@shared/rules/index';
 import { Button } from '@/components/ui/button';
 import { Field, controlClass } from '@/components/ui/field';
+import { TextField } from '@/components/ui/text-field';
 import { roundTo, type LengthUnit } from '@/lib/units';
 import {
   formPath,
@@ -117,30 +118,19 @@ export function CustomProfileEditor({
       </div>
 
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Name of this guideline" error={error('customProfile.label')}>
-          {(c) => (
-            <input
-              {...c}
-              {...register('customProfile.label')}
-              type="text"
-              className={controlClass}
-            />
-          )}
-        </Field>
-        <Field
+        <TextField
+          label="Name of this guideline"
+          error={error('customProfile.label')}
+          {...register('customProfile.label')}
+          type="text"
+        />
+        <TextField
           label="Where the figures come from"
           hint="Shown behind “Why?” with every piece of advice."
           error={error('customProfile.source')}
-        >
-          {(c) => (
-            <input
-              {...c}
-              {...register('customProfile.source')}
-              type="text"
-              className={controlClass}
-            />
-          )}
-        </Field>
+          {...register('customProfile.source')}
+          type="text"
+        />
       </div>
 
       <fieldset className="flex flex-col gap-2">

@@ -5,6 +5,7 @@ import { INVITATION_DAYS, type InvitationInput } from '@shared/schemas/invitatio
 import { roles } from '@shared/schemas/enums';
 import { Field, controlClass } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
+import { TextField } from '@/components/ui/text-field';
 import { roleLabels } from '@/lib/auth';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUnitSystem } from '@/lib/units';
@@ -52,18 +53,15 @@ export function InviteForm({ sugarbushId }: { sugarbushId: number }) {
       className="flex flex-col gap-4"
     >
       <div className="flex flex-wrap items-start gap-3">
-        <Field label="E-mail" error={errors.email?.message} className="min-w-60 flex-[2]">
-          {(control) => (
-            <input
-              {...control}
-              {...register('email')}
-              type="email"
-              inputMode="email"
-              autoComplete="off"
-              className={controlClass}
-            />
-          )}
-        </Field>
+        <TextField
+          label="E-mail"
+          error={errors.email?.message}
+          className="min-w-60 flex-[2]"
+          {...register('email')}
+          type="email"
+          inputMode="email"
+          autoComplete="off"
+        />
         <Field label="Role" error={errors.role?.message} className="min-w-40 flex-1">
           {(control) => (
             <select {...control} {...register('role')} className={controlClass}>

@@ -5,6 +5,7 @@ import type { Sugarbush } from '@shared/schemas/sugarbush';
 import { cn } from '@/components/ui/cn';
 import { Field, controlClass } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
+import { TextField } from '@/components/ui/text-field';
 import { compassChoiceLabel, compassPoints, exactPoint } from '@/lib/compass';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUnitSystem } from '@/lib/units';
@@ -54,17 +55,13 @@ export function StandForm({ stand }: { stand: Sugarbush }) {
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex max-w-xl flex-col gap-4">
-      <Field label="Name" error={errors.name?.message}>
-        {(control) => (
-          <input
-            {...control}
-            {...register('name')}
-            type="text"
-            autoComplete="off"
-            className={controlClass}
-          />
-        )}
-      </Field>
+      <TextField
+        label="Name"
+        error={errors.name?.message}
+        {...register('name')}
+        type="text"
+        autoComplete="off"
+      />
       <fieldset className="flex flex-col gap-2">
         <legend className="text-sm font-bold">Sunny side</legend>
         <p className="max-w-prose text-sm text-bark">
