@@ -6,7 +6,7 @@ import { Pager, pageRange } from '@/components/ui/pager';
 import { Skeleton, TableSkeleton } from '@/components/ui/skeleton';
 import { UnitToggle } from '@/components/ui/unit-toggle';
 import { SeasonStepper } from '@/features/advice/components/season-stepper';
-import { WhyDisclosure } from '@/features/advice/components/why-disclosure';
+import { WhyDisclosure } from '@/components/ui/why-disclosure';
 import { TreeListEmpty } from '@/features/trees/components/tree-list-empty';
 import { nextSort, toTableSort } from '@/lib/list-search-params';
 import { formatNumber, useUnitSystem } from '@/lib/units';
