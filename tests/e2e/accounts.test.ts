@@ -139,29 +139,28 @@ describe('accounts, in a real browser', () => {
     await context.close();
   });
 
-  it('an owner invites a new person, who makes an account from the link and lands on the stand; the link then says it is used', async () => {
+  it('the owner invites a new consultant from Settings; the link, opened in a fresh browser, makes the account, which sees Owl Ledge; the link then says it is used', async () => {
     const email = 'juniper.hale@hemlock-hollow.example';
     const stand = await server.db('sugarbushes').where({ name: 'Owl Ledge' }).first('id');
     const before = await lastOutboxId();
 
-    const ownerContext = await browser.newContext();
+    const ownerContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const owner = await ownerContext.newPage();
+    const ownerHosts = recordHosts(owner);
     await owner.goto(`${server.url}/sign-in`);
     await signIn(owner, 'owner@fernside.example', 'maple-demo-2027');
     await owner.waitForURL(/\/sugarbushes\/\d+\/trees/);
-    const status = await owner.evaluate(
-      async ({ id, to }) => {
-        const { token } = await (await fetch('/api/auth/csrf')).json();
-        const res = await fetch(`/api/sugarbushes/${id}/invitations`, {
-          method: 'POST',
-          headers: { 'content-type': 'application/json', 'x-csrf-token': token },
-          body: JSON.stringify({ email: to, role: 'tapper' }),
-        });
-        return res.status;
-      },
-      { id: stand.id, to: email },
-    );
-    expect(status).toBe(201);
+    await owner.goto(`${server.url}/sugarbushes/${stand.id}/settings`);
+    const invite = owner.getByRole('form', { name: 'Invite someone' });
+    await invite.getByLabel('E-mail').fill(email);
+    await invite.getByLabel('Role').selectOption('consultant');
+    await invite.getByRole('button', { name: 'Send the invitation' }).click();
+    await owner.getByText(`Invitation sent to ${email}`).waitFor();
+    await owner
+      .getByRole('list', { name: 'Invitations' })
+      .getByRole('listitem', { name: email })
+      .waitFor();
+    expect(offSite(ownerHosts)).toEqual([]);
     await ownerContext.close();
 
     const token = await mailedToken(email, '/invitations', before);
@@ -170,13 +169,16 @@ describe('accounts, in a real browser', () => {
     const hosts = recordHosts(page);
     await page.goto(`${server.url}/invitations/${token}`);
     await page.getByRole('heading', { name: 'Join Owl Ledge' }).waitFor();
-    await page.getByText('Record tapholes').waitFor();
+    await page.getByText('Write notes').first().waitFor();
     await page.getByLabel('Your name').fill('Juniper Hale');
     await page.getByLabel('Password', { exact: true }).fill('spouts-in-by-march');
     await page.getByLabel('Password again').fill('spouts-in-by-march');
     await page.getByRole('button', { name: 'Create account and join' }).click();
     await page.waitForURL(new RegExp(`/sugarbushes/${stand.id}/trees`));
     await page.getByRole('table', { name: 'Tree register' }).waitFor({ timeout: 15000 });
+    await page.getByText('Owl Ledge').first().waitFor();
+    const me = await page.evaluate(async () => (await fetch('/api/auth/me')).json());
+    expect(me.memberships).toEqual([{ sugarbushId: stand.id, role: 'consultant' }]);
 
     await page.goto(`${server.url}/invitations/${token}`);
     await page.getByRole('heading', { name: 'This invitation has already been used' }).waitFor();
