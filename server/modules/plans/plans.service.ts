@@ -18,12 +18,18 @@ import {
 import { shared, standVersion } from '../../lib/stand-changes';
 import { loadStandTrees } from './plans.repository';
 
-const summary = (p: GuidelineProfile): ProfileSummary => ({
+const summary = (p: GuidelineProfile, notice: string | null): ProfileSummary => ({
   key: p.key,
   label: p.label,
   source: p.source,
   heightBand: { minCm: p.heightBand.minCm, maxCm: p.heightBand.maxCm },
   floor: p.zone.floor,
+  unit: p.unit,
+  spacing: p.spacing,
+  stainLengthCm: p.zone.stainLengthCm,
+  stainMarginCm: p.zone.stainMarginCm,
+  seasonRules: p.seasonRules,
+  notice,
 });
 
 /** Trees the advisor does not tap have no meaningful share: they sort after every tapped one. */
@@ -42,7 +48,7 @@ export function plansService(ctx: AppContext) {
     const row = await ctx
       .db('sugarbushes')
       .where({ id: sugarbushId })
-      .first('profile', 'custom_profile', 'sunny_azimuth_deg');
+      .first('profile', 'custom_profile', 'sunny_azimuth_deg', 'profile_notice');
     if (!row) throw new AppError(404, 'not-found', 'Sugarbush not found');
     let profile: GuidelineProfile;
     if (row.profile === 'custom') {
@@ -59,16 +65,20 @@ export function plansService(ctx: AppContext) {
     } else {
       profile = resolveProfile(row.profile);
     }
-    return { profile, sunnyAzimuthDeg: row.sunny_azimuth_deg as number };
+    return {
+      profile,
+      sunnyAzimuthDeg: row.sunny_azimuth_deg as number,
+      notice: (row.profile_notice as string | null) ?? null,
+    };
   }
 
   /** The whole stand's plan; concurrent requests on the same record share one computation. */
   function wholePlan(sugarbushId: number, season: number) {
     const key = `plan:${sugarbushId}:${season}:${standVersion(ctx.db, sugarbushId)}`;
     return shared(ctx.db, key, async () => {
-      const { profile, sunnyAzimuthDeg } = await standSettings(sugarbushId);
+      const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
       const trees = await loadStandTrees(ctx.db, sugarbushId);
-      return { profile, plan: planStand(trees, { season, profile, sunnyAzimuthDeg }) };
+      return { profile, notice, plan: planStand(trees, { season, profile, sunnyAzimuthDeg }) };
     });
   }
 
@@ -78,16 +88,22 @@ export function plansService(ctx: AppContext) {
       treeId: number,
       season = upcomingSeason(),
     ): Promise<TreeAdvice> {
-      const { profile, sunnyAzimuthDeg } = await standSettings(sugarbushId);
+      const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
       const [tree] = await loadStandTrees(ctx.db, sugarbushId, treeId);
       if (!tree) throw new AppError(404, 'not-found', 'Tree not found');
       const advice = adviseTree(tree, { season, profile, sunnyAzimuthDeg, withProjection: true });
-      return { ...advice, treeId: tree.id, tag: tree.tag, season, profile: summary(profile) };
+      return {
+        ...advice,
+        treeId: tree.id,
+        tag: tree.tag,
+        season,
+        profile: summary(profile, notice),
+      };
     },
 
     async planForStand(sugarbushId: number, q: PlanQuery): Promise<StandPlanResponse> {
       const season = q.season ?? upcomingSeason();
-      const { profile, plan } = await wholePlan(sugarbushId, season);
+      const { profile, notice, plan } = await wholePlan(sugarbushId, season);
       let items = plan.items as PlanItem[];
       if (q.q) items = items.filter((i) => i.tag.toLowerCase().includes(q.q!.toLowerCase()));
       if (q.verdict) items = items.filter((i) => i.verdict === q.verdict);
@@ -105,7 +121,7 @@ export function plansService(ctx: AppContext) {
       const start = (q.page - 1) * q.pageSize;
       return {
         season,
-        profile: summary(profile),
+        profile: summary(profile, notice),
         totals: plan.totals,
         items: items.slice(start, start + q.pageSize),
         total: items.length,
