@@ -11,10 +11,15 @@ import helmet from 'helmet';
 import type { Knex } from 'knex';
 import type { Config } from './config';
 import type { AppContext } from './context';
+import { createBackground } from './lib/background';
+import { anonymousCsrfId } from './lib/anonymous-id';
+import { consoleLogger, type Logger } from './lib/logger';
 import { createMailer, type Mailer } from './mail/mailer';
 import { errorHandler, notFoundHandler } from './middleware/errors';
+import { devRoutes } from './modules/dev/dev.routes';
 import { apiRoutes } from './routes';
 import { authRoutes } from './modules/auth/auth.routes';
+import { invitationLinkRoutes } from './modules/invitations/invitations.routes';
 import { createPassport } from './modules/auth/passport';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -25,27 +30,52 @@ export interface AppOptions {
   mailer?: Mailer;
   /** Folder of the built client; served with an SPA fallback when it exists. */
   clientDir?: string | null;
-  log?: (err: unknown) => void;
+  log?: Logger;
 }
 
 /** Build the Express app. Exported for tests; `index.ts` only listens. */
 export function createApp(opts: AppOptions) {
   const { config, db } = opts;
-  const ctx: AppContext = { db, config, mailer: opts.mailer ?? createMailer(config, db) };
+  const log = opts.log ?? consoleLogger;
+  const ctx: AppContext = {
+    db,
+    config,
+    log,
+    mailer: opts.mailer ?? createMailer(config, db, log),
+    background: createBackground(log),
+  };
   const production = config.NODE_ENV === 'production';
   const app = express();
-  app.set('trust proxy', 'loopback');
+  // `X-Forwarded-For` counts only from a proxy the operator named; by default nobody's.
+  app.set('trust proxy', config.TRUST_PROXY);
   app.disable('x-powered-by');
 
   app.use(
     helmet({
       contentSecurityPolicy: {
+        useDefaults: false,
         directives: {
+          'default-src': ["'self'"],
+          'base-uri': ["'self'"],
+          'connect-src': ["'self'"],
+          // Vite inlines the smallest font subsets as data: URLs.
+          'font-src': ["'self'", 'data:'],
+          'form-action': ["'self'"],
+          'frame-ancestors': ["'none'"],
           'img-src': ["'self'", 'data:', 'blob:'],
-          'upgrade-insecure-requests': config.COOKIE_SECURE ? [] : null,
+          'object-src': ["'none'"],
+          'script-src': ["'self'"],
+          'script-src-attr': ["'none'"],
+          // Leaflet and the charts position elements with inline style attributes.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'worker-src': ["'self'", 'blob:'],
+          ...(config.COOKIE_SECURE ? { 'upgrade-insecure-requests': [] } : {}),
         },
       },
-      strictTransportSecurity: config.COOKIE_SECURE,
+      // HSTS only where the app is served over HTTPS (COOKIE_SECURE=true behind TLS).
+      strictTransportSecurity: config.COOKIE_SECURE
+        ? { maxAge: 180 * 24 * 3600, includeSubDomains: false }
+        : false,
     }),
   );
   // Large answers (a whole stand's map data) shrink several-fold; tiles are already compressed.
@@ -84,14 +114,19 @@ export function createApp(opts: AppOptions) {
 
   const { generateCsrfToken, doubleCsrfProtection } = doubleCsrf({
     getSecret: () => config.SESSION_SECRET,
-    getSessionIdentifier: (req) => req.session.id,
+    // Signed in: the stored session. Before that: a cookie-only id, so that an anonymous visitor
+    // asking for a token leaves no session row behind.
+    getSessionIdentifier: (req) =>
+      req.user ? `session:${req.session.id}` : `anonymous:${anonymousCsrfId(req)}`,
     cookieName: config.COOKIE_SECURE ? '__Host-clearwood.x-csrf' : 'clearwood.x-csrf',
     cookieOptions: { sameSite: 'lax', secure: config.COOKIE_SECURE, path: '/' },
     errorConfig: { statusCode: 403, code: 'EBADCSRFTOKEN', message: 'invalid csrf token' },
   });
 
   app.use('/api', doubleCsrfProtection);
+  app.use('/api', devRoutes(ctx));
   app.use('/api/auth', authRoutes(ctx, passport, generateCsrfToken));
+  app.use('/api', invitationLinkRoutes(ctx));
   app.use('/api', apiRoutes(ctx));
   app.use('/api', notFoundHandler);
 
@@ -110,6 +145,6 @@ export function createApp(opts: AppOptions) {
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
   }
 
-  app.use(errorHandler({ production, log: opts.log }));
-  return app;
+  app.use(errorHandler({ log }));
+  return Object.assign(app, { ctx });
 }

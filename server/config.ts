@@ -3,19 +3,52 @@ import { z } from 'zod';
 
 const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
 
+/** The session secret a fresh checkout runs with; refused in production. */
+export const DEFAULT_SESSION_SECRET = 'clearwood-local-session-secret-change-me';
+
+/**
+ * `TRUST_PROXY`: which hop's `X-Forwarded-For` to believe. Off by default, so a client cannot
+ * choose the address the rate limits count; behind a reverse proxy name it (`loopback`, an
+ * address or subnet list, or a hop count).
+ */
+const trustProxy = z
+  .string()
+  .trim()
+  .min(1)
+  .transform((v, ctx): boolean | number | string => {
+    if (v === 'false' || v === '0') return false;
+    if (v === 'true')
+      ctx.addIssue({
+        code: 'custom',
+        message: 'trusting every proxy lets any client forge its address: name the proxy instead',
+      });
+    if (/^\d+$/.test(v)) return Number(v);
+    return v;
+  });
+
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   /** 0 picks a free port (tests). */
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  /** The interface to listen on; every interface when unset. */
+  HOST: z.string().trim().min(1).optional(),
   DATABASE_FILE: z.string().min(1).default('data/clearwood.sqlite'),
-  SESSION_SECRET: z.string().min(16).default('clearwood-local-session-secret-change-me'),
-  /** Send cookies only over HTTPS; off for plain-http local runs. */
+  SESSION_SECRET: z.string().min(16).default(DEFAULT_SESSION_SECRET),
+  /** Send cookies only over HTTPS (and send HSTS); off for plain-http local runs. */
   COOKIE_SECURE: bool.default(false),
-  SEED_DEMO: bool.default(true),
+  /** Seed the demo into an empty database; on by default except in production. */
+  SEED_DEMO: bool.optional(),
   MAIL_TRANSPORT: z.enum(['outbox', 'smtp']).default('outbox'),
   SMTP_URL: z.string().url().optional(),
   MAIL_FROM: z.string().default('Clearwood <no-reply@clearwood.example>'),
+  /**
+   * Unsafe, development only: a web page of the local outbox at `/api/dev/outbox`, answering
+   * requests from loopback alone. Anyone who can read it can take over any account.
+   */
+  DEV_OUTBOX_VIEW: bool.default(false),
   APP_URL: z.string().url().optional(),
+  TRUST_PROXY: trustProxy.default(false),
+  /** Sign-in attempts per address, and per account, in 15 minutes. */
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(20),
   /** Largest basemap (MBTiles) upload, in bytes; 200 MiB by default. */
   BASEMAP_MAX_BYTES: z.coerce
@@ -27,7 +60,12 @@ const envSchema = z.object({
   BASEMAP_DIR: z.string().min(1).optional(),
 });
 
-export type Config = z.infer<typeof envSchema> & { appUrl: string; BASEMAP_DIR: string };
+type Parsed = z.infer<typeof envSchema>;
+export type Config = Omit<Parsed, 'SEED_DEMO' | 'BASEMAP_DIR'> & {
+  appUrl: string;
+  SEED_DEMO: boolean;
+  BASEMAP_DIR: string;
+};
 
 /** Parse the environment once; a bad value stops start-up with a message naming each variable. */
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -37,11 +75,21 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new ConfigError(`Invalid environment:\n${lines.join('\n')}`);
   }
   const c = parsed.data;
-  if (c.MAIL_TRANSPORT === 'smtp' && !c.SMTP_URL) {
-    throw new ConfigError('Invalid environment:\n  SMTP_URL: required when MAIL_TRANSPORT=smtp');
-  }
+  const production = c.NODE_ENV === 'production';
+  const problems: string[] = [];
+  if (c.MAIL_TRANSPORT === 'smtp' && !c.SMTP_URL)
+    problems.push('SMTP_URL: required when MAIL_TRANSPORT=smtp');
+  if (production && c.SESSION_SECRET === DEFAULT_SESSION_SECRET)
+    problems.push(
+      'SESSION_SECRET: set a secret of your own (at least 16 characters) in production',
+    );
+  if (production && c.DEV_OUTBOX_VIEW)
+    problems.push('DEV_OUTBOX_VIEW: the outbox view is for development only, never in production');
+  if (problems.length > 0)
+    throw new ConfigError(`Invalid environment:\n${problems.map((p) => `  ${p}`).join('\n')}`);
   return {
     ...c,
+    SEED_DEMO: c.SEED_DEMO ?? !production,
     appUrl: c.APP_URL ?? `http://localhost:${c.PORT}`,
     BASEMAP_DIR: c.BASEMAP_DIR ?? path.join(path.dirname(c.DATABASE_FILE), 'basemaps'),
   };

@@ -1,5 +1,7 @@
 import type { Knex } from 'knex';
 import type { Config } from './config';
+import type { Background } from './lib/background';
+import type { Logger } from './lib/logger';
 import type { Mailer } from './mail/mailer';
 
 /** What every module needs, built once per app. */
@@ -7,4 +9,6 @@ export interface AppContext {
   db: Knex;
   config: Config;
   mailer: Mailer;
+  log: Logger;
+  background: Background;
 }

@@ -10,17 +10,22 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   await migrateLatest(db);
   const app = createApp({ config, db });
   const server = await new Promise<Server>((resolve, reject) => {
-    const s = app.listen(config.PORT, () => resolve(s));
+    const s = config.HOST
+      ? app.listen(config.PORT, config.HOST, () => resolve(s))
+      : app.listen(config.PORT, () => resolve(s));
     s.on('error', reject);
   });
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : config.PORT;
   const url = `http://localhost:${port}`;
+  // A free port picked at start (PORT=0) is the one mailed links must name.
+  if (!env.APP_URL && config.PORT === 0) config.appUrl = url;
   const close = async () => {
     await new Promise<void>((resolve) => server.close(() => resolve()));
+    await app.ctx.background.idle();
     await db.destroy();
   };
-  return { config, db, server, url, close };
+  return { config, db, server, url, close, ctx: app.ctx };
 }
 
 export function exitOnConfigError(err: unknown): never {

@@ -2,7 +2,8 @@ import { Router } from 'express';
 import type { AppContext } from './context';
 import { requireAuth } from './middleware/auth';
 import { basemapsRoutes } from './modules/basemaps/basemaps.routes';
-import { devRoutes } from './modules/dev/dev.routes';
+import { invitationsRoutes } from './modules/invitations/invitations.routes';
+import { membersRoutes } from './modules/members/members.routes';
 import { mapRoutes } from './modules/map/map.routes';
 import { measurementsRoutes } from './modules/measurements/measurements.routes';
 import { notesRoutes } from './modules/notes/notes.routes';
@@ -14,7 +15,6 @@ import { treesRoutes } from './modules/trees/trees.routes';
 /** Every API route behind sign-in (the auth routes are mounted before this). */
 export function apiRoutes(ctx: AppContext) {
   const router = Router();
-  router.use(devRoutes(ctx));
   router.use(requireAuth);
   router.use(sugarbushesRoutes(ctx));
   router.use(treesRoutes(ctx));
@@ -24,5 +24,7 @@ export function apiRoutes(ctx: AppContext) {
   router.use(plansRoutes(ctx));
   router.use(mapRoutes(ctx));
   router.use(basemapsRoutes(ctx));
+  router.use(membersRoutes(ctx));
+  router.use(invitationsRoutes(ctx));
   return router;
 }

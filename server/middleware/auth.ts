@@ -76,3 +76,23 @@ export function requirePermission(action: Permission): RequestHandler {
     next();
   };
 }
+
+/**
+ * A change whose fields need different actions: every field present in the body needs its own
+ * (a forester may redraw the boundary but not rename the stand). A body naming none of them
+ * still needs one of the actions, so a member who may change nothing gets 403, not a no-op.
+ */
+export function requireFieldPermissions(byField: Record<string, Permission>): RequestHandler {
+  const all = [...new Set(Object.values(byField))];
+  return (req, res, next) => {
+    const role = accessOf(res)?.role;
+    const body = (req.body ?? {}) as Record<string, unknown>;
+    const present = Object.keys(byField).filter((field) => body[field] !== undefined);
+    const allowed =
+      present.length > 0
+        ? present.every((field) => can(role, byField[field]))
+        : all.some((action) => can(role, action));
+    if (!allowed) return next(forbidden());
+    next();
+  };
+}

@@ -28,10 +28,17 @@ async function main() {
     });
     if (result.status !== 0) throw new Error('The client build failed');
   }
-  const { config: c } = await startServer();
+  const { config: c, db } = await startServer();
   console.log(`\nClearwood is serving on ${c.appUrl}  (database: ${c.DATABASE_FILE})`);
-  console.log(`Sign in at ${c.appUrl}/sign-in with any of these (password ${DEMO_PASSWORD}):`);
-  for (const u of DEMO_USERS) console.log(`  ${u.email.padEnd(32)} ${u.role}`);
+  const demo = await db('users').where({ email: DEMO_USERS[0].email }).first('id');
+  if (demo) {
+    console.log(`Sign in at ${c.appUrl}/sign-in with any of these (password ${DEMO_PASSWORD}):`);
+    for (const u of DEMO_USERS) console.log(`  ${u.email.padEnd(32)} ${u.role}`);
+  } else {
+    console.log(`Create the first account at ${c.appUrl}/sign-up`);
+  }
+  if (c.MAIL_TRANSPORT === 'outbox')
+    console.log('Mail goes to the local outbox: each message and its link is printed here.');
 }
 
 main().catch(exitOnConfigError);

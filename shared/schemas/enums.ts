@@ -3,6 +3,12 @@ import { z } from 'zod';
 export const roles = ['owner', 'forester', 'tapper', 'consultant'] as const;
 export const roleSchema = z.enum(roles);
 export type Role = z.infer<typeof roleSchema>;
+export const roleLabels: Record<Role, string> = {
+  owner: 'Owner',
+  forester: 'Forester',
+  tapper: 'Tapper',
+  consultant: 'Consultant',
+};
 
 export const species = [
   'sugar-maple',

@@ -7,7 +7,7 @@ import { json, mockApi } from '@/test/api-mock';
 import { meAs, page, sugarbush, tree } from '@/test/fixtures';
 import { createRoutes } from './router';
 
-function openApp(url: string, me: unknown) {
+function openApp(url: string, me: unknown, routes: Record<string, unknown> = {}) {
   const api = mockApi({
     // Nobody signed in: the API answers 401 for /me.
     'GET /api/auth/me':
@@ -18,6 +18,7 @@ function openApp(url: string, me: unknown) {
     ]),
     'GET /api/sugarbushes/3': sugarbush(),
     'GET /api/sugarbushes/3/trees': page([tree()]),
+    ...routes,
   });
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   const router = createMemoryRouter(createRoutes(queryClient), { initialEntries: [url] });
@@ -89,5 +90,65 @@ describe('the app shell', () => {
     openApp('/sugarbushes/3/notes', asRole('consultant'));
     expect(await screen.findByRole('heading', { name: 'Notes' })).toBeInTheDocument();
     expect(screen.getByText('Coming soon in Clearwood')).toBeInTheDocument();
+  });
+
+  it('when nobody is signed in, then the account pages and an invitation open without sending them to sign-in', async () => {
+    const { router } = openApp('/forgot-password', null, {
+      'GET /api/invitations/invite-token-0123456789': json(410, {
+        error: { code: 'invitation-expired', message: 'Expired' },
+      }),
+    });
+    expect(
+      await screen.findByRole('heading', { name: 'Forgot your password?' }),
+    ).toBeInTheDocument();
+    await router.navigate('/sign-up');
+    expect(await screen.findByRole('heading', { name: 'Create an account' })).toBeInTheDocument();
+    await router.navigate('/reset-password?token=reset-token-0123456789');
+    expect(
+      await screen.findByRole('heading', { name: 'Choose a new password' }),
+    ).toBeInTheDocument();
+    await router.navigate('/invitations/invite-token-0123456789');
+    expect(
+      await screen.findByRole('heading', { name: 'This invitation has expired' }),
+    ).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/invitations/invite-token-0123456789');
+    expect(screen.queryByRole('navigation', { name: 'Sections' })).not.toBeInTheDocument();
+  });
+
+  it('when someone signed in opens the sign-up page, then they go home instead', async () => {
+    const { router } = openApp('/sign-up', asRole('tapper'));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/sugarbushes/3/trees'));
+  });
+
+  it('when a new user with no stand starts one from home, then they land on its empty register, told to add the first tree on the map', async () => {
+    let memberships: { sugarbushId: number; role: Role }[] = [];
+    const created = sugarbush({ id: 9, name: 'Beaver Flats', role: 'owner', treeCount: 0 });
+    const { router, user } = openApp('/', null, {
+      'GET /api/auth/me': () => ({ status: 200, body: { ...meAs('owner'), memberships } }),
+      'GET /api/sugarbushes': () => ({
+        status: 200,
+        body: page(memberships.length ? [created] : []),
+      }),
+      'POST /api/sugarbushes': () => {
+        memberships = [{ sugarbushId: 9, role: 'owner' }];
+        return { status: 201, body: created };
+      },
+      'GET /api/sugarbushes/9': created,
+      'GET /api/sugarbushes/9/trees': page([]),
+    });
+
+    const home = await screen.findByRole('main');
+    expect(await within(home).findByText("You're not part of a sugarbush yet")).toBeInTheDocument();
+    expect(within(home).getByText(/ask its owner to invite you/)).toBeInTheDocument();
+    await user.click(within(home).getByRole('link', { name: 'Start a sugarbush' }));
+    await user.type(await screen.findByLabelText('Name of the sugarbush'), 'Beaver Flats');
+    await user.click(screen.getByRole('button', { name: 'Start the sugarbush' }));
+
+    await waitFor(() => expect(router.state.location.pathname).toBe('/sugarbushes/9/trees'));
+    expect(
+      await screen.findByText('No trees yet — add the first tree on the map'),
+    ).toBeInTheDocument();
+    const [rail] = await screen.findAllByRole('navigation', { name: 'Sections' });
+    expect(within(rail).getByRole('link', { name: 'Settings' })).toBeInTheDocument();
   });
 });

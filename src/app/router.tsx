@@ -13,6 +13,33 @@ const handle = (section: SectionKey): SectionHandle => ({ section });
 
 /** Every page is its own lazily loaded module; loaders that need the cache get it here. */
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
+  // Pages for someone who may not be signed in: outside the shell, like sign-in.
+  const publicPages: { path: string; load: NonNullable<RouteObject['lazy']> }[] = [
+    {
+      path: paths.signUp.path,
+      load: async () => {
+        const { SignUpRoute, signUpLoader } = await import('./routes/sign-up');
+        return { Component: SignUpRoute, loader: signUpLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.forgotPassword.path,
+      load: async () => ({
+        Component: (await import('./routes/forgot-password')).ForgotPasswordRoute,
+      }),
+    },
+    {
+      path: paths.resetPassword.path,
+      load: async () => ({
+        Component: (await import('./routes/reset-password')).ResetPasswordRoute,
+      }),
+    },
+    {
+      path: paths.invitation.path,
+      load: async () => ({ Component: (await import('./routes/invitation')).InvitationRoute }),
+    },
+  ];
+
   return [
     {
       path: paths.signIn.path,
@@ -23,6 +50,12 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
         return { Component: SignInRoute, loader: signInLoader(queryClient) };
       },
     },
+    ...publicPages.map(({ path, load }) => ({
+      path,
+      hydrateFallbackElement: <AppLoading />,
+      errorElement: <RouteError />,
+      lazy: load,
+    })),
     {
       id: 'app',
       Component: AppShell,
@@ -39,6 +72,12 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                 const { HomeRoute, homeLoader } = await import('./routes/home');
                 return { Component: HomeRoute, loader: homeLoader(queryClient) };
               },
+            },
+            {
+              path: paths.newSugarbush.path,
+              lazy: async () => ({
+                Component: (await import('./routes/new-sugarbush')).NewSugarbushRoute,
+              }),
             },
             {
               path: paths.trees.path,

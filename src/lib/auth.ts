@@ -3,7 +3,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { MeResponse } from '@shared/schemas/auth';
 import type { Role } from '@shared/schemas/enums';
 import { permissions, type Permission as SharedPermission } from '@shared/schemas/permissions';
-import { api, isApiError } from './api-client';
+import { api, isApiError, resetCsrfToken } from './api-client';
 
 export const authKeys = {
   all: ['auth'] as const,
@@ -32,6 +32,22 @@ export const useMe = () => useQuery(meQueryOptions());
 /** Loaders call this: the signed-in user, or null. */
 export const ensureMe = (queryClient: QueryClient) => queryClient.ensureQueryData(meQueryOptions());
 
+/**
+ * After anything that signs someone in (sign-in, a confirmed sign-up, an account made from an
+ * invitation): the session is new, so its CSRF token and everything cached belong to the old one.
+ * `keep` names the key prefixes the page still on screen reads while it moves on.
+ */
+export function adoptSession(
+  queryClient: QueryClient,
+  me: MeResponse,
+  keep: readonly string[] = [],
+): void {
+  resetCsrfToken();
+  const kept = new Set<unknown>([authKeys.all[0], ...keep]);
+  queryClient.removeQueries({ predicate: (q) => !kept.has(q.queryKey[0]) });
+  queryClient.setQueryData(authKeys.me(), me);
+}
+
 /** What a role may do: the shared table the API enforces, plus reading, which every member may. */
 export type Permission = SharedPermission | 'read';
 
@@ -43,12 +59,7 @@ export const rolesFor = (permission: Permission): readonly Role[] =>
 export const can = (role: Role | undefined, permission: Permission): boolean =>
   role !== undefined && rolesFor(permission).includes(role);
 
-export const roleLabels: Record<Role, string> = {
-  owner: 'Owner',
-  forester: 'Forester',
-  tapper: 'Tapper',
-  consultant: 'Consultant',
-};
+export { roleLabels } from '@shared/schemas/enums';
 
 /** The user's role in one sugarbush, or undefined while unknown or when not a member. */
 export function useRole(sugarbushId: number | undefined): Role | undefined {

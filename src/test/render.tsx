@@ -1,7 +1,7 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import type { ReactElement } from 'react';
+import { StrictMode, type ReactElement } from 'react';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 
 /** Renders one page at a URL, with a fresh cache that does not retry. */
@@ -10,6 +10,8 @@ export function renderPage(options: {
   url: string;
   element: ReactElement;
   handle?: unknown;
+  /** Render as the app does, under StrictMode (effects run twice in development). */
+  strict?: boolean;
 }) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   const router = createMemoryRouter(
@@ -20,10 +22,11 @@ export function renderPage(options: {
     { initialEntries: [options.url] },
   );
   const user = userEvent.setup();
-  const view = render(
+  const tree = (
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />
-    </QueryClientProvider>,
+    </QueryClientProvider>
   );
+  const view = render(options.strict ? <StrictMode>{tree}</StrictMode> : tree);
   return { ...view, router, queryClient, user };
 }

@@ -1,15 +1,17 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '../../shared/schemas/enums';
-import { makeTestApp, signIn, standWithTeam } from './test-app';
+import { addMember, addUser, makeTestApp, signIn, standWithTeam } from './test-app';
 
 type Who = Role | 'outsider';
 interface RouteCase {
   name: string;
   method: 'get' | 'post' | 'patch';
-  path: (ids: { standId: number; treeId: number }) => string;
+  path: (ids: { standId: number; treeId: number; memberId: number }) => string;
   body?: () => Record<string, unknown>;
   /** Who may; every other member gets 403, the outsider 404. */
   allowed: Role[];
+  /** The status of an allowed request, when not 200 (GET, PATCH) or 201 (POST). */
+  okStatus?: number;
 }
 
 const everyone: Role[] = ['owner', 'forester', 'tapper', 'consultant'];
@@ -26,7 +28,75 @@ const cases: RouteCase[] = [
     method: 'patch',
     path: (i) => `/api/sugarbushes/${i.standId}`,
     body: () => ({ name: 'Renamed Ridge' }),
+    allowed: ['owner'],
+  },
+  {
+    name: 'set the sunny side',
+    method: 'patch',
+    path: (i) => `/api/sugarbushes/${i.standId}`,
+    body: () => ({ sunnyAzimuthDeg: 170 }),
+    allowed: ['owner'],
+  },
+  {
+    name: 'redraw the boundary',
+    method: 'patch',
+    path: (i) => `/api/sugarbushes/${i.standId}`,
+    body: () => ({
+      boundary: {
+        type: 'Polygon',
+        coordinates: [
+          [
+            [-72.5, 44.1],
+            [-72.49, 44.1],
+            [-72.49, 44.11],
+            [-72.5, 44.11],
+            [-72.5, 44.1],
+          ],
+        ],
+      },
+    }),
     allowed: ['owner', 'forester'],
+  },
+  {
+    name: 'send an empty change of the stand',
+    method: 'patch',
+    path: (i) => `/api/sugarbushes/${i.standId}`,
+    body: () => ({}),
+    allowed: ['owner', 'forester'],
+  },
+  {
+    name: 'preview a guideline',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/guideline-preview`,
+    body: () => ({ profile: 'traditional' }),
+    allowed: ['owner'],
+    okStatus: 200,
+  },
+  {
+    name: 'list the team',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/members`,
+    allowed: everyone,
+  },
+  {
+    name: 'change a member’s role',
+    method: 'patch',
+    path: (i) => `/api/sugarbushes/${i.standId}/members/${i.memberId}`,
+    body: () => ({ role: 'tapper' }),
+    allowed: ['owner'],
+  },
+  {
+    name: 'list invitations',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/invitations`,
+    allowed: ['owner'],
+  },
+  {
+    name: 'invite someone',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/invitations`,
+    body: () => ({ email: `invitee-${++n}@test.example`, role: 'tapper' }),
+    allowed: ['owner'],
   },
   {
     name: 'change the guideline profile',
@@ -111,13 +181,15 @@ const cases: RouteCase[] = [
 ];
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
-let ids: { standId: number; treeId: number };
+let ids: { standId: number; treeId: number; memberId: number };
 const agents = {} as Record<Who, Awaited<ReturnType<typeof signIn>>>;
 
 beforeAll(async () => {
   t = await makeTestApp();
   const team = await standWithTeam(t.db);
-  ids = { standId: team.standId, treeId: team.treeId };
+  const memberId = await addUser(t.db, 'second-tapper@test.example');
+  await addMember(t.db, memberId, team.standId, 'tapper');
+  ids = { standId: team.standId, treeId: team.treeId, memberId };
   for (const who of [...everyone, 'outsider'] as Who[])
     agents[who] = await signIn(t.app, team.users[who]);
 });
@@ -130,7 +202,11 @@ describe.each(cases)('$name', (c) => {
     if (c.method !== 'get') req = req.set('x-csrf-token', csrf).send(c.body!());
     const res = await req;
     const expected =
-      who === 'outsider' ? 404 : c.allowed.includes(who) ? (c.method === 'post' ? 201 : 200) : 403;
+      who === 'outsider'
+        ? 404
+        : c.allowed.includes(who)
+          ? (c.okStatus ?? (c.method === 'post' ? 201 : 200))
+          : 403;
     expect(res.status, JSON.stringify(res.body)).toBe(expected);
     if (expected >= 400)
       expect(res.body.error.code).toBe(expected === 404 ? 'not-found' : 'forbidden');

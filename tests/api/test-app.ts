@@ -5,6 +5,7 @@ import request from 'supertest';
 import type { Knex } from 'knex';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
+import { quietLogger } from '../../server/lib/logger';
 import { createDb, migrateLatest } from '../../server/db';
 import { hashPassword } from '../../server/modules/auth/password';
 import type { Role } from '../../shared/schemas/enums';
@@ -24,8 +25,8 @@ export async function makeTestApp(env: Record<string, string> = {}, file?: strin
   });
   const db = createDb(dbFile);
   await migrateLatest(db);
-  const app = createApp({ config, db, clientDir: null, log: () => undefined });
-  return { app, db, config, dbFile, close: () => db.destroy() };
+  const app = createApp({ config, db, clientDir: null, log: quietLogger });
+  return { app, db, config, dbFile, ctx: app.ctx, close: () => db.destroy() };
 }
 
 let hashed: string | undefined;
@@ -93,4 +94,26 @@ export async function signIn(
     throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   const { body } = await agent.get('/api/auth/csrf');
   return { agent, csrf: body.token as string, me: res.body };
+}
+
+/** A visitor who is not signed in, holding a CSRF token for their cookie-only id. */
+export async function csrfAgent(app: Parameters<typeof request.agent>[0]) {
+  const agent = request.agent(app);
+  const { body } = await agent.get('/api/auth/csrf');
+  return { agent, csrf: body.token as string };
+}
+
+/** The newest mail the local outbox holds for this address (read from the database). */
+export async function lastMailTo(db: Knex, to: string) {
+  const row = await db('outbox').where({ to_address: to }).orderBy('id', 'desc').first();
+  if (!row) throw new Error(`no mail to ${to} in the outbox`);
+  return row as { subject: string; body: string };
+}
+
+/** The token of the app link `path?token=…` or `path/<token>` in a mail's text. */
+export function linkToken(text: string, path: string): string {
+  const escaped = path.replace(/[/.]/g, (c) => `\\${c}`);
+  const match = new RegExp(`${escaped}(?:\\?token=|/)([\\w-]+)`).exec(text);
+  if (!match) throw new Error(`no ${path} link in: ${text}`);
+  return match[1];
 }

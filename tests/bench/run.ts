@@ -8,6 +8,8 @@ import os from 'node:os';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { loadConfig } from '../../server/config';
+import { createBackground } from '../../server/lib/background';
+import { quietLogger } from '../../server/lib/logger';
 import { createDb, migrateLatest } from '../../server/db';
 import { createMailer } from '../../server/mail/mailer';
 import { loadStandTrees } from '../../server/modules/plans/plans.repository';
@@ -59,7 +61,13 @@ async function benchPlan() {
   const advise = await time(() =>
     planStand(read.value, { season: SEASON, profile: 'conservative' }),
   );
-  const service = plansService({ db, config, mailer: createMailer(config, db) });
+  const service = plansService({
+    db,
+    config,
+    log: quietLogger,
+    mailer: createMailer(config, db, quietLogger),
+    background: createBackground(quietLogger),
+  });
   const endpoint = await time(() =>
     service.planForStand(standId, { page: 1, pageSize: 50, season: SEASON }),
   );

@@ -1,30 +1,26 @@
 import { Router, type Request, type Response } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import type { PassportStatic } from 'passport';
-import { z } from 'zod';
 import type { AppContext } from '../../context';
 import { AppError } from '../../errors';
+import { ensureAnonymousId } from '../../lib/anonymous-id';
 import { currentUser, requireAuth } from '../../middleware/auth';
 import { parsed, validate } from '../../middleware/validate';
 import {
   loginSchema,
+  registerConfirmSchema,
   registerSchema,
+  resetConfirmSchema,
+  resetRequestSchema,
   type LoginInput,
   type PublicUser,
+  type RegisterConfirmInput,
   type RegisterInput,
+  type ResetConfirmInput,
+  type ResetRequestInput,
 } from '../../../shared/schemas/auth';
+import { authLimits } from './auth-limits';
 import { authService } from './auth.service';
-
-const resetRequestSchema = z.object({
-  email: z.string().trim().toLowerCase().email('Enter an e-mail address'),
-});
-const resetConfirmSchema = z.object({
-  token: z.string().min(10),
-  password: registerSchema.shape.password,
-});
-
-const logIn = (req: Request, user: PublicUser) =>
-  new Promise<void>((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
+import { logIn } from './log-in';
 
 export function authRoutes(
   ctx: AppContext,
@@ -33,22 +29,14 @@ export function authRoutes(
 ) {
   const router = Router();
   const service = authService(ctx);
-  const loginLimiter = rateLimit({
-    windowMs: 15 * 60_000,
-    limit: ctx.config.LOGIN_RATE_LIMIT,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) =>
-      next(new AppError(429, 'too-many-attempts', 'Too many sign-in attempts: wait a few minutes')),
-  });
+  const limits = authLimits(ctx.config);
 
   router.get('/csrf', (req, res) => {
-    // Mark the session so it is stored and its id stays stable for the token.
-    (req.session as unknown as { csrf?: boolean }).csrf = true;
+    ensureAnonymousId(req, res, ctx.config.COOKIE_SECURE);
     res.json({ token: csrfToken(req, res) });
   });
 
-  router.post('/login', loginLimiter, validate({ body: loginSchema }), async (req, res) => {
+  router.post('/login', ...limits.signIn, validate({ body: loginSchema }), async (req, res) => {
     const { email, password } = parsed<LoginInput>(res, 'body');
     const user = await new Promise<PublicUser | false>((resolve, reject) => {
       req.body = { email, password };
@@ -76,27 +64,43 @@ export function authRoutes(
     res.json(await service.me(currentUser(req)));
   });
 
-  router.post('/register', loginLimiter, validate({ body: registerSchema }), async (req, res) => {
-    const user = await service.register(parsed<RegisterInput>(res, 'body'));
-    await logIn(req, user);
-    res.status(201).json(await service.me(user));
-  });
+  router.post(
+    '/register',
+    ...limits.signUp,
+    validate({ body: registerSchema }),
+    async (_req, res) => {
+      res.status(202).json(await service.register(parsed<RegisterInput>(res, 'body')));
+    },
+  );
+
+  router.post(
+    '/register/confirm',
+    ...limits.signUp,
+    validate({ body: registerConfirmSchema }),
+    async (req, res) => {
+      const { token } = parsed<RegisterConfirmInput>(res, 'body');
+      const user = await service.confirmRegistration(token);
+      await logIn(req, user);
+      res.status(201).json(await service.me(user));
+    },
+  );
 
   router.post(
     '/password-reset',
-    loginLimiter,
+    ...limits.reset,
     validate({ body: resetRequestSchema }),
     async (_req, res) => {
-      await service.requestPasswordReset(parsed<{ email: string }>(res, 'body').email);
-      res.status(202).json({ ok: true });
+      const { email } = parsed<ResetRequestInput>(res, 'body');
+      res.status(202).json(await service.requestPasswordReset(email));
     },
   );
 
   router.post(
     '/password-reset/confirm',
+    ...limits.signUp,
     validate({ body: resetConfirmSchema }),
     async (_req, res) => {
-      const { token, password } = parsed<z.infer<typeof resetConfirmSchema>>(res, 'body');
+      const { token, password } = parsed<ResetConfirmInput>(res, 'body');
       await service.confirmPasswordReset(token, password);
       res.json({ ok: true });
     },

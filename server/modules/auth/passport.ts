@@ -2,7 +2,10 @@ import { Passport, type PassportStatic } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { Knex } from 'knex';
 import { toPublicUser, usersRepository } from '../users/users.repository';
-import { verifyPassword } from './password';
+import { hashPassword, verifyPassword } from './password';
+
+/** Checked against when the e-mail is unknown, so that answer takes as long as a wrong password. */
+let dummyHash: Promise<string> | undefined;
 
 /** A Passport instance of the app's own (no global state shared between test apps). */
 export function createPassport(db: Knex): PassportStatic {
@@ -12,7 +15,12 @@ export function createPassport(db: Knex): PassportStatic {
     new LocalStrategy({ usernameField: 'email' }, async (email, password, done) => {
       try {
         const row = await users.findByEmail(email.trim());
-        if (!row || !(await verifyPassword(password, row.password_hash))) return done(null, false);
+        if (!row) {
+          dummyHash ??= hashPassword('no account has this password');
+          await verifyPassword(password, await dummyHash);
+          return done(null, false);
+        }
+        if (!(await verifyPassword(password, row.password_hash))) return done(null, false);
         return done(null, toPublicUser(row));
       } catch (err) {
         return done(err);

@@ -29,7 +29,7 @@ export function basemapsRoutes(ctx: AppContext, tiles: TileStore = tileStore()) 
   router.post(
     '/sugarbushes/:id/basemaps',
     member,
-    requirePermission('edit-trees'),
+    requirePermission('upload-basemaps'),
     receiveBasemap(ctx.config),
     async (req, res) => {
       res.status(201).json(await service.upload(accessOf(res), req.file!, req.body));

@@ -54,12 +54,12 @@ export function basemapsService(ctx: AppContext, tiles: TileStore) {
       try {
         const { name } = basemapUploadSchema.parse(fields ?? {});
         const info = inspectMbtiles(file.path);
-        const fallback = path.basename(file.originalname).replace(/\.mbtiles$/i, '');
+        const fallback = printable(path.basename(file.originalname)).replace(/\.mbtiles$/i, '');
         const id = await ctx.db.transaction(async (trx) => {
           const newId = await basemapsRepository(trx).insert({
             sugarbushId: access.sugarbushId,
             name: (name || info.name || fallback || 'Basemap').slice(0, 120),
-            fileName: file.originalname.slice(0, 255),
+            fileName: printable(file.originalname).slice(0, 255),
             format: info.format,
             minZoom: info.minZoom,
             maxZoom: info.maxZoom,
@@ -105,4 +105,10 @@ export function basemapsService(ctx: AppContext, tiles: TileStore) {
       return { status: 200, etag, data };
     },
   };
+}
+
+/** A file name as the client sent it, without control characters (a NUL among them). */
+function printable(name: string): string {
+  // eslint-disable-next-line no-control-regex
+  return name.replace(/[\u0000-\u001f\u007f]/g, '').trim();
 }

@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import Database from 'better-sqlite3';
 import { AppError } from '../../errors';
 import { MAX_TILE_ZOOM, type BasemapFormat } from '../../../shared/schemas/map';
+import { checkMbtilesSchema, ensureTileIndexes } from './mbtiles-schema';
 
 /** What an MBTiles file says about itself, checked. */
 export interface MbtilesInfo {
@@ -101,9 +102,10 @@ function parseCenter(value: string | undefined): [number, number, number] | null
 }
 
 /**
- * Open an uploaded file read-only and check that it is a raster MBTiles (spec 1.3): an SQLite
- * database with `tiles(zoom_level, tile_column, tile_row, tile_data)` and `metadata(name, value)`
- * tables or views, a raster format (png, jpg, webp; sniffed from the first tile when the metadata
+ * Open an uploaded file (the caller's own copy) and check that it is a raster MBTiles (spec 1.3):
+ * an SQLite database with `tiles(zoom_level, tile_column, tile_row, tile_data)` and
+ * `metadata(name, value)` as plain tables, or tiles as the standard map/images view (see
+ * `checkMbtilesSchema`; lookup indexes are added when missing), a raster format (png, jpg, webp; sniffed from the first tile when the metadata
  * has none), sane bounds and zooms (derived from the tiles when the metadata has none), and at
  * least one tile. The file must be the caller's own copy (see `checkSqliteHeader`). Throws an AppError whose code the client shows: not-mbtiles, not-raster,
  * bad-bounds or bad-zoom.
@@ -113,11 +115,12 @@ export function inspectMbtiles(file: string): MbtilesInfo {
     throw notMbtiles('The file is not an MBTiles basemap: it is not an SQLite database');
   let db: Database.Database;
   try {
-    db = new Database(file, { readonly: true, fileMustExist: true });
+    db = new Database(file, { fileMustExist: true });
   } catch {
     throw notMbtiles('The file could not be opened as an SQLite database');
   }
   try {
+    ensureTileIndexes(db, checkMbtilesSchema(db));
     return readInfo(db);
   } catch (err) {
     if (err instanceof AppError) throw err;

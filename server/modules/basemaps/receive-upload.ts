@@ -42,7 +42,16 @@ export function receiveBasemap(config: Config): RequestHandler {
         return next();
       }
       removeQuietly(req.file?.path);
-      if (!(err instanceof multer.MulterError)) return next(err);
+      // Anything else the form parser throws (no boundary, a truncated body, a bad part header)
+      // is the client's malformed request, not our failure.
+      if (!(err instanceof multer.MulterError))
+        return next(
+          new AppError(
+            400,
+            'bad-upload',
+            'The upload could not be read: send a multipart form with the file in the field "file"',
+          ),
+        );
       if (err.code === 'LIMIT_FILE_SIZE')
         return next(
           new AppError(
@@ -57,7 +66,7 @@ export function receiveBasemap(config: Config): RequestHandler {
             file: 'Send one MBTiles file, in the field "file"',
           }),
         );
-      next(new AppError(400, 'bad-upload', `The upload could not be read (${err.message})`));
+      next(err);
     });
   };
 }

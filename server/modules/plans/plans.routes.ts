@@ -1,9 +1,13 @@
 import { Router } from 'express';
 import type { z } from 'zod';
 import type { AppContext } from '../../context';
-import { accessOf, sugarbushAccess, treeAccess } from '../../middleware/auth';
+import { accessOf, requirePermission, sugarbushAccess, treeAccess } from '../../middleware/auth';
 import { parsed, validate } from '../../middleware/validate';
 import { adviceQuerySchema, planQuerySchema, type PlanQuery } from '../../../shared/schemas/plan';
+import {
+  guidelinePreviewInputSchema,
+  type GuidelinePreviewInput,
+} from '../../../shared/schemas/guideline-preview';
 import { plansService } from './plans.service';
 
 export function plansRoutes(ctx: AppContext) {
@@ -28,6 +32,17 @@ export function plansRoutes(ctx: AppContext) {
       res.json(
         await service.planForStand(accessOf(res).sugarbushId, parsed<PlanQuery>(res, 'query')),
       );
+    },
+  );
+
+  router.post(
+    '/sugarbushes/:id/guideline-preview',
+    sugarbushAccess(ctx.db),
+    requirePermission('choose-guideline'),
+    validate({ body: guidelinePreviewInputSchema }),
+    async (_req, res) => {
+      const body = parsed<GuidelinePreviewInput>(res, 'body');
+      res.json(await service.previewGuideline(accessOf(res).sugarbushId, body));
     },
   );
 

@@ -15,7 +15,13 @@ import {
   type StandPlanResponse,
   type TreeAdvice,
 } from '../../../shared/schemas/plan';
+import type {
+  GuidelinePreview,
+  GuidelinePreviewInput,
+} from '../../../shared/schemas/guideline-preview';
 import { shared, standVersion } from '../../lib/stand-changes';
+import { profileColumns } from '../sugarbushes/profile-choice';
+import { diffPlans } from './plan-diff';
 import { loadStandTrees } from './plans.repository';
 
 const summary = (p: GuidelineProfile, notice: string | null): ProfileSummary => ({
@@ -44,31 +50,26 @@ const sorters: Record<string, (a: PlanItem, b: PlanItem) => number> = {
 };
 
 export function plansService(ctx: AppContext) {
-  async function standSettings(sugarbushId: number) {
+  async function standRow(sugarbushId: number) {
     const row = await ctx
       .db('sugarbushes')
       .where({ id: sugarbushId })
       .first('profile', 'custom_profile', 'sunny_azimuth_deg', 'profile_notice');
     if (!row) throw new AppError(404, 'not-found', 'Sugarbush not found');
-    let profile: GuidelineProfile;
-    if (row.profile === 'custom') {
-      const result = validateCustomProfile(
-        row.custom_profile ? JSON.parse(row.custom_profile) : null,
-      );
-      if (!result.ok)
-        throw new AppError(
-          409,
-          'profile-invalid',
-          'The saved custom profile is not valid: fix it in Settings',
-        );
-      profile = result.profile;
-    } else {
-      profile = resolveProfile(row.profile);
-    }
+    return row as {
+      profile: string;
+      custom_profile: string | null;
+      sunny_azimuth_deg: number;
+      profile_notice: string | null;
+    };
+  }
+
+  async function standSettings(sugarbushId: number) {
+    const row = await standRow(sugarbushId);
     return {
-      profile,
-      sunnyAzimuthDeg: row.sunny_azimuth_deg as number,
-      notice: (row.profile_notice as string | null) ?? null,
+      profile: profileOf(row.profile, row.custom_profile),
+      sunnyAzimuthDeg: row.sunny_azimuth_deg,
+      notice: row.profile_notice ?? null,
     };
   }
 
@@ -101,6 +102,32 @@ export function plansService(ctx: AppContext) {
       };
     },
 
+    /** The season's plan under another guideline, against today's, before the owner saves it. */
+    async previewGuideline(
+      sugarbushId: number,
+      input: GuidelinePreviewInput,
+    ): Promise<GuidelinePreview> {
+      const season = input.season ?? upcomingSeason();
+      const row = await standRow(sugarbushId);
+      const stored = row.custom_profile ? JSON.parse(row.custom_profile) : null;
+      const columns = profileColumns(input, { profile: row.profile, customProfile: stored });
+      const target = profileOf(
+        input.profile,
+        (columns.custom_profile as string | undefined) ?? row.custom_profile,
+      );
+      const { profile: current, plan: before } = await wholePlan(sugarbushId, season);
+      const trees = await loadStandTrees(ctx.db, sugarbushId);
+      const after = planStand(trees, {
+        season,
+        profile: target,
+        sunnyAzimuthDeg: row.sunny_azimuth_deg,
+      });
+      return diffPlans(
+        { plan: before, label: current.label },
+        { plan: after, label: target.label },
+      );
+    },
+
     async planForStand(sugarbushId: number, q: PlanQuery): Promise<StandPlanResponse> {
       const season = q.season ?? upcomingSeason();
       const { profile, notice, plan } = await wholePlan(sugarbushId, season);
@@ -130,4 +157,17 @@ export function plansService(ctx: AppContext) {
       };
     },
   };
+}
+
+/** The guideline a stand's columns name; a saved custom set that no longer passes is a 409. */
+function profileOf(key: string, customJson: string | null): GuidelineProfile {
+  if (key !== 'custom') return resolveProfile(key);
+  const result = validateCustomProfile(customJson ? JSON.parse(customJson) : null);
+  if (!result.ok)
+    throw new AppError(
+      409,
+      'profile-invalid',
+      'The saved custom profile is not valid: fix it in Settings',
+    );
+  return result.profile;
 }

@@ -1,7 +1,12 @@
 import { Router } from 'express';
 import type { z } from 'zod';
 import type { AppContext } from '../../context';
-import { accessOf, currentUser, requirePermission, sugarbushAccess } from '../../middleware/auth';
+import {
+  accessOf,
+  currentUser,
+  requireFieldPermissions,
+  sugarbushAccess,
+} from '../../middleware/auth';
 import { parsed, validate } from '../../middleware/validate';
 import { listQuerySchema, type ListQuery } from '../../../shared/schemas/list-query';
 import { sugarbushInputSchema, sugarbushPatchSchema } from '../../../shared/schemas/sugarbush';
@@ -29,7 +34,13 @@ export function sugarbushesRoutes(ctx: AppContext) {
   router.patch(
     '/sugarbushes/:id',
     member,
-    requirePermission('edit-trees'),
+    requireFieldPermissions({
+      name: 'manage-stand',
+      sunnyAzimuthDeg: 'manage-stand',
+      boundary: 'edit-boundary',
+      profile: 'choose-guideline',
+      customProfile: 'choose-guideline',
+    }),
     validate({ body: sugarbushPatchSchema }),
     async (_req, res) => {
       const access = accessOf(res);

@@ -12,7 +12,6 @@ import type { sugarbushInputSchema, sugarbushPatchSchema } from '../../../shared
 
 export function sugarbushesService(ctx: AppContext) {
   const repo = sugarbushesRepository(ctx.db);
-  const members = membersRepository(ctx.db);
   const audit = auditRepository(ctx.db);
 
   return {
@@ -54,14 +53,6 @@ export function sugarbushesService(ctx: AppContext) {
       id: number,
       patch: z.output<typeof sugarbushPatchSchema>,
     ): Promise<Sugarbush> {
-      const role = await members.roleOf(userId, id);
-      const touchesProfile =
-        patch.profile !== undefined ||
-        patch.customProfile !== undefined ||
-        patch.sunnyAzimuthDeg !== undefined;
-      if (touchesProfile && role !== 'owner') {
-        throw new AppError(403, 'forbidden', 'Only the owner may change the guideline profile');
-      }
       const current = await this.get(userId, id);
       const row: Record<string, unknown> = profileColumns(patch, current);
       if (patch.name !== undefined) row.name = patch.name;

@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
 import { EmptyState } from '@/components/ui/empty-state';
+import { ActionLink } from '@/components/ui/text-link';
 import { paths } from '@/config/paths';
 import { sugarbushesQueryOptions } from '@/features/sugarbushes/api/get-sugarbushes';
 import { requireMe } from '../loaders';
@@ -23,7 +24,14 @@ export function HomeRoute() {
     <>
       <title>Clearwood</title>
       <EmptyState title="You're not part of a sugarbush yet">
-        Ask the owner of your sugarbush to invite you. The invitation arrives by e-mail.
+        <p>Start the record of your own stand, or join one someone else runs.</p>
+        <ActionLink to={paths.newSugarbush.href()} className="mt-4 md:w-auto">
+          Start a sugarbush
+        </ActionLink>
+        <p className="mt-4">
+          To join a sugarbush, ask its owner to invite you. The invitation arrives by e-mail; open
+          its link to join.
+        </p>
       </EmptyState>
     </>
   );

@@ -1,5 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { PublicPage } from '@/components/ui/public-page';
+import { TextLink } from '@/components/ui/text-link';
 import { paths, safeNext } from '@/config/paths';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { ensureMe } from '@/lib/auth';
@@ -20,14 +22,12 @@ export function SignInRoute() {
   const next = safeNext(params.get('next'));
 
   return (
-    <main className="flex min-h-screen items-start justify-center px-4 pt-16 md:items-center md:pt-0">
-      <title>Sign in · Clearwood</title>
-      <div className="w-full max-w-sm">
-        <p className="text-lg font-bold tracking-wide">Clearwood</p>
-        <h1 className="mt-6 text-xl font-bold">Sign in</h1>
-        <p className="mb-6 mt-1 text-bark">Your sugarbush record, every tree and every season.</p>
-        <SignInForm onSignedIn={() => navigate(next ?? paths.home.href(), { replace: true })} />
-      </div>
-    </main>
+    <PublicPage title="Sign in" lead="Your sugarbush record, every tree and every season.">
+      <SignInForm onSignedIn={() => navigate(next ?? paths.home.href(), { replace: true })} />
+      <nav aria-label="Account" className="flex flex-col gap-1 md:gap-2">
+        <TextLink to={paths.forgotPassword.href()}>Forgot your password?</TextLink>
+        <TextLink to={paths.signUp.href()}>Create an account</TextLink>
+      </nav>
+    </PublicPage>
   );
 }

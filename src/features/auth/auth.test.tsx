@@ -62,4 +62,37 @@ describe('signing in', () => {
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
     await waitFor(() => expect(router.state.location.pathname).toBe('/'));
   });
+
+  it('offers a way to a new password and a way to make an account', async () => {
+    openSignIn(meAs('owner'));
+    expect(await screen.findByRole('link', { name: 'Forgot your password?' })).toHaveAttribute(
+      'href',
+      '/forgot-password',
+    );
+    expect(screen.getByRole('link', { name: 'Create an account' })).toHaveAttribute(
+      'href',
+      '/sign-up',
+    );
+  });
+
+  it('when the server refuses a field, then its message sits under that field and not above the button', async () => {
+    const { user } = openSignIn(
+      json(400, {
+        error: {
+          code: 'validation',
+          message: 'Check the highlighted fields',
+          fields: { email: 'Use the address your invitation went to' },
+        },
+      }),
+    );
+    await user.type(screen.getByLabelText('E-mail'), 'owner@example.test');
+    await user.type(screen.getByLabelText('Password'), 'maple-syrup-42');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+    await waitFor(() =>
+      expect(screen.getByLabelText('E-mail')).toHaveAccessibleDescription(
+        'Use the address your invitation went to',
+      ),
+    );
+    expect(screen.queryByRole('alert')).not.toBeInTheDocument();
+  });
 });

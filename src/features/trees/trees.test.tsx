@@ -110,11 +110,24 @@ describe('the tree register', () => {
     expect(window.localStorage.getItem('clearwood.unitSystem')).toBe('metric');
   });
 
-  it('when the stand has no trees, then it says what to do next', async () => {
+  it('when the stand has no trees and the user may add them, then it says to add the first one on the map', async () => {
     openRegister({ [LIST]: page([], { total: 0 }) });
     expect(
-      await screen.findByText('No trees yet — import a CSV or add the first tree on the map'),
+      await screen.findByText('No trees yet — add the first tree on the map'),
     ).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Open the map' })).toHaveAttribute(
+      'href',
+      '/sugarbushes/3/map',
+    );
+  });
+
+  it('when the stand has no trees and the user may not add them, then it says who can', async () => {
+    openRegister({ [LIST]: page([], { total: 0 }), 'GET /api/auth/me': meAs('tapper') });
+    expect(
+      await screen.findByText(/owners and foresters add the trees on the map/),
+    ).toBeInTheDocument();
+    expect(screen.queryByText(/add the first tree/)).not.toBeInTheDocument();
+    expect(screen.queryByRole('link', { name: 'Open the map' })).not.toBeInTheDocument();
   });
 
   it('when the register fails to load, then Retry asks again', async () => {

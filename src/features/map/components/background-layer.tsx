@@ -46,7 +46,6 @@ export function BackgroundLayer({
         minNativeZoom={basemap.minZoom}
         maxNativeZoom={basemap.maxZoom}
         maxZoom={MAX_MAP_ZOOM}
-        attribution={basemap.name}
       />
     );
   }

@@ -51,7 +51,10 @@ interface MapWorkspaceProps {
 /** The map, its legend and card, and the tools around it. */
 export function MapWorkspace({ sugarbushId, data, sugarbush }: MapWorkspaceProps) {
   const { system, unit } = useUnitSystem();
-  const canEdit = can(useRole(sugarbushId), 'edit-trees');
+  const role = useRole(sugarbushId);
+  const canEdit = can(role, 'edit-trees');
+  const canEditBoundary = can(role, 'edit-boundary');
+  const canUploadBasemaps = can(role, 'upload-basemaps');
   const { filters, setFilters, selectedId, select } = useMapParams();
   const [map, setMap] = useState<L.Map | null>(null);
   const [focus, setFocus] = useState<FocusRequest | null>(null);
@@ -218,8 +221,12 @@ export function MapWorkspace({ sugarbushId, data, sugarbush }: MapWorkspaceProps
             Arrow keys step from tree to tree; + and − zoom; Esc closes the card.
           </p>
           <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
-            <MapBackgrounds sugarbushId={sugarbushId} canEdit={canEdit} state={backgrounds} />
-            {canEdit && (
+            <MapBackgrounds
+              sugarbushId={sugarbushId}
+              canEdit={canUploadBasemaps}
+              state={backgrounds}
+            />
+            {canEditBoundary && (
               <Suspense fallback={null}>
                 <BoundaryTools
                   sugarbushId={sugarbushId}

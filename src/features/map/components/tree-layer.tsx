@@ -60,7 +60,12 @@ export function TreeLayer({ trees, selectedId, onSelect }: TreeLayerProps) {
       const marker = new TreeMarker([tree.lat, tree.lng], lookOf(tree, zoom, isSelected), {
         bubblingMouseEvents: false,
       });
-      marker.bindTooltip(tree.tag, { direction: 'top', offset: [0, -8], className: 'cw-tag-tip' });
+      // Leaflet sets a string tooltip as HTML; a text node keeps a tag a tag, built on opening.
+      marker.bindTooltip(() => textElement(tree.tag), {
+        direction: 'top',
+        offset: [0, -8],
+        className: 'cw-tag-tip',
+      });
       marker.on('click', () => onSelectRef.current(tree.id));
       group.addLayer(marker);
       markers.set(tree.id, { marker, tree });
@@ -102,4 +107,10 @@ export function TreeLayer({ trees, selectedId, onSelect }: TreeLayerProps) {
   }, [map]);
 
   return null;
+}
+
+function textElement(text: string): HTMLElement {
+  const span = document.createElement('span');
+  span.textContent = text;
+  return span;
 }

@@ -1,7 +1,9 @@
 import { useId } from 'react';
+import { Link } from 'react-router';
 import { Button } from '@/components/ui/button';
 import { controlClass } from '@/components/ui/field';
 import { Skeleton } from '@/components/ui/skeleton';
+import { paths } from '@/config/paths';
 import { roleLabels } from '@/lib/auth';
 import { useSugarbushes } from '../api/get-sugarbushes';
 
@@ -28,6 +30,16 @@ export function SugarbushSwitcher({ currentId, onSelect }: Props) {
   }
 
   const items = sugarbushes.data.items;
+  if (items.length === 0) {
+    return (
+      <Link
+        to={paths.newSugarbush.href()}
+        className="inline-flex min-h-11 items-center underline underline-offset-4 md:min-h-0"
+      >
+        Start a sugarbush
+      </Link>
+    );
+  }
   const current = items.find((s) => s.id === currentId);
   if (items.length === 1 && current) {
     return (

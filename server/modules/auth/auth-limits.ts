@@ -1,0 +1,44 @@
+import type { Request } from 'express';
+import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
+import type { Config } from '../../config';
+import { AppError } from '../../errors';
+
+const WINDOW_MS = 15 * 60_000;
+
+/** The account an attempt names, as the sign-in compares it. */
+const accountKey = (req: Request) =>
+  `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '')
+    .trim()
+    .toLowerCase()}`;
+
+/** The client's address: the socket's, or a configured proxy's `X-Forwarded-For` (TRUST_PROXY). */
+const addressKey = (req: Request) => `address:${ipKeyGenerator(req.ip ?? '')}`;
+
+function limiter(config: Config, keyGenerator: Options['keyGenerator'], extra: Partial<Options>) {
+  return rateLimit({
+    windowMs: WINDOW_MS,
+    limit: config.LOGIN_RATE_LIMIT,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    keyGenerator,
+    // The header is ignored unless a proxy is trusted; no need to warn about it in the log.
+    validate: { xForwardedForHeader: false },
+    handler: (_req, _res, next) =>
+      next(new AppError(429, 'too-many-attempts', 'Too many attempts: wait a few minutes')),
+    ...extra,
+  });
+}
+
+/**
+ * Throttles for the account routes, built per app: sign-in failures count per address and per
+ * account (so neither many accounts from one place nor one account from many places gets far);
+ * sign-up and reset requests count per address, reset requests also per account.
+ */
+export function authLimits(config: Config) {
+  const failures = { skipSuccessfulRequests: true };
+  return {
+    signIn: [limiter(config, addressKey, failures), limiter(config, accountKey, failures)],
+    signUp: [limiter(config, addressKey, {})],
+    reset: [limiter(config, addressKey, {}), limiter(config, accountKey, {})],
+  };
+}
