@@ -235,6 +235,7 @@ export const profiles = {
     label: 'Quebec public land (forest management permits)',
     ...quebec,
     source: sources.quebecPublic,
+    notes: [...quebec.notes, sources.quebecPublicUntil2022],
   }),
 } satisfies Record<string, GuidelineProfile>;
 

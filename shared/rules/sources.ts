@@ -14,9 +14,12 @@ export const sources = {
    * standard. The rule until 2022-12-31 (s.58) was read in the version of 2024-11-19.
    */
   quebecPublic:
-    'Quebec, Regulation respecting forest management permits, A-18.1 r.8.1 s.24 (in force since 2023-01-01; table from memory, matching M-35.1 r.8.1 s.6 — the current text of s.24 was not found in the official pages read 2026-12-01; until 2022-12-31 s.58 read 19.1–39 cm one tap, 39.1–59 cm two, 59.1–79 cm three, 79.1 cm and more four, read 2026-12-01 in the version of 2024-11-19)',
+    'Quebec, Regulation respecting forest management permits, A-18.1 r.8.1 s.24 (in force 2023–; table from memory, as the private-land standard M-35.1 r.8.1 s.6: its current text was not found when read 2026-12-01)',
+  /** What s.24 read until 2022-12-31, from its transitional s.58. */
+  quebecPublicUntil2022:
+    'A-18.1 r.8.1 s.58: until 2022-12-31, s.24 read 19.1–39 cm one tap, 39.1–59 cm two, 59.1–79 cm three, 79.1 cm and more four (version of 2024-11-19, read 2026-12-01)',
   quebecPrivate:
-    'Quebec, sugar-bush plan standard for private land, M-35.1 r.8.1 s.6 (in force 2023–; read 2026-12-01 in the version of 2023-09-20)',
+    'Quebec, sugar-bush plan standard for private land, M-35.1 r.8.1 s.6 (in force 2023–; version of 2023-09-20, read 2026-12-01)',
   /** The conditions that go with both Quebec tables (s.24 1°, 4°–6°, 9°, as s.58 reads them). */
   quebecConditions:
     'Quebec, Regulation respecting forest management permits, A-18.1 r.8.1 s.24 (as s.58 reads it, version of 2024-11-19, read 2026-12-01)',
