@@ -60,7 +60,15 @@ describe('the app shell', () => {
     const names = within(rail)
       .getAllByRole('link')
       .map((l) => l.textContent);
-    expect(names).toEqual(['Trees', 'Map', 'Season plan', 'Overview', 'Notes', 'Season log']);
+    expect(names).toEqual([
+      'Trees',
+      'Map',
+      'Season plan',
+      'Overview',
+      'Notes',
+      'Season log',
+      'Settings',
+    ]);
     expect(within(rail).getByRole('link', { name: 'Trees' })).toHaveAttribute(
       'aria-current',
       'page',

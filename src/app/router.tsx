@@ -7,7 +7,7 @@ import { RouteError } from './route-error';
 import { AppShell } from './shell/app-shell';
 import type { SectionHandle } from './shell/sections';
 
-const planned: SectionKey[] = ['round', 'overview', 'notes', 'season', 'settings'];
+const planned: SectionKey[] = ['round', 'overview', 'notes', 'season'];
 
 const handle = (section: SectionKey): SectionHandle => ({ section });
 
@@ -103,6 +103,13 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               handle: handle('map'),
               lazy: async () => ({
                 Component: (await import('./routes/woods-map')).WoodsMapRoute,
+              }),
+            },
+            {
+              path: paths.settings.path,
+              handle: handle('settings'),
+              lazy: async () => ({
+                Component: (await import('./routes/settings')).SettingsRoute,
               }),
             },
             ...planned.map((section) => ({

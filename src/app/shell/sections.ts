@@ -67,8 +67,9 @@ export const sections: readonly Section[] = [
     key: 'settings',
     label: 'Settings',
     shortLabel: 'Settings',
-    permission: 'manage-stand',
-    summary: 'The team and their roles, the stand boundary and the tapping guideline.',
+    permission: 'read',
+    summary:
+      "The stand's name and sunny side, the tapping guideline, and the team and their roles.",
   },
 ];
 

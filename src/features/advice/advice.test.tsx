@@ -5,7 +5,7 @@ import { meAs, page, taphole } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
 import { treeAdvice } from './advice-fixtures';
 import { AdviceCard } from './components/advice-card';
-import { VerdictBadge } from './components/verdict-badge';
+import { VerdictBadge } from '@/components/verdict-badge';
 
 const ADVICE = 'GET /api/trees/7/advice';
 

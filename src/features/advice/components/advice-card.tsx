@@ -15,9 +15,9 @@ import { LongRun } from './long-run';
 import { SeasonStepper } from './season-stepper';
 import { ShareProjectionChart } from './share-projection-chart';
 import { TrunkDiagram } from './trunk-diagram';
-import { VerdictBadge } from './verdict-badge';
+import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningList } from './warning-list';
-import { WhyDisclosure } from './why-disclosure';
+import { WhyDisclosure } from '@/components/ui/why-disclosure';
 
 /** The season shown is kept in the URL (`?season=`), so a link from the plan opens the same one. */
 function useSeasonSearchParam() {

@@ -1,6 +1,8 @@
+import { queryRoots } from '@/lib/query-roots';
+
 /** Everything the map reads, under one prefix so an edit can refresh it all at once. */
 export const mapKeys = {
-  all: ['map'] as const,
+  all: queryRoots.map,
   trees: (sugarbushId: number, season?: number) =>
     [...mapKeys.all, 'trees', sugarbushId, season ?? 'upcoming'] as const,
   figures: (sugarbushId: number, season?: number) =>

@@ -1,4 +1,4 @@
-import { VerdictBadge } from '@/features/advice/components/verdict-badge';
+import { VerdictBadge } from '@/components/verdict-badge';
 import { formatNumber } from '@/lib/units';
 import type { LegendCounts } from '../lib/legend-counts';
 import { verdictStyles } from '../lib/verdict-style';

@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import { speciesLabels } from '@shared/schemas/enums';
 import { Button } from '@/components/ui/button';
 import { paths } from '@/config/paths';
-import { VerdictBadge } from '@/features/advice/components/verdict-badge';
+import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningChip } from '@/features/advice/components/warning-chip';
 import { TreeStatusLabel } from '@/features/trees/components/tree-status';
 import { formatDbh, type LengthUnit } from '@/lib/units';

@@ -1,5 +1,6 @@
 import type { VerdictKey, WarningCode } from '@shared/rules/index';
 import type { PlanQuery } from '@shared/schemas/plan';
+import { queryRoots } from '@/lib/query-roots';
 
 export type PlanSort = NonNullable<PlanQuery['sort']>;
 
@@ -15,7 +16,7 @@ export interface PlanFilters {
 }
 
 export const planKeys = {
-  all: ['plans'] as const,
+  all: queryRoots.plans,
   lists: () => [...planKeys.all, 'list'] as const,
   list: (sugarbushId: number, filters: PlanFilters) =>
     [...planKeys.lists(), sugarbushId, filters] as const,

@@ -5,7 +5,7 @@ import {
   type WarningCode,
 } from '@shared/rules/index';
 import { cn } from '@/components/ui/cn';
-import { VerdictBadge } from '@/features/advice/components/verdict-badge';
+import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningMark } from '@/features/advice/components/warning-chip';
 import { warningLabel } from '@/features/advice/warning-labels';
 import { formatNumber } from '@/lib/units';

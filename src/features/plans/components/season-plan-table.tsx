@@ -3,7 +3,7 @@ import type { PlanItem } from '@shared/schemas/plan';
 import { DataTable, type Column, type TableSort } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
 import { shortPlacements, formatShare } from '@/features/advice/advice-words';
-import { VerdictBadge } from '@/features/advice/components/verdict-badge';
+import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningChip } from '@/features/advice/components/warning-chip';
 import { seasonParam } from '@/features/advice/season';
 import { formatDbh, lengthUnitOf, type UnitSystem } from '@/lib/units';

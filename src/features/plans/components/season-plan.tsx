@@ -7,7 +7,7 @@ import { Skeleton, TableSkeleton } from '@/components/ui/skeleton';
 import { UnitToggle } from '@/components/ui/unit-toggle';
 import { GuidelineNotice, RuleList } from '@/features/advice/components/guideline-rules';
 import { SeasonStepper } from '@/features/advice/components/season-stepper';
-import { WhyDisclosure } from '@/features/advice/components/why-disclosure';
+import { WhyDisclosure } from '@/components/ui/why-disclosure';
 import { TreeListEmpty } from '@/features/trees/components/tree-list-empty';
 import { nextSort, toTableSort } from '@/lib/list-search-params';
 import { formatNumber, useUnitSystem } from '@/lib/units';

@@ -1,5 +1,7 @@
+import { queryRoots } from '@/lib/query-roots';
+
 export const sugarbushKeys = {
-  all: ['sugarbushes'] as const,
+  all: queryRoots.sugarbushes,
   lists: () => [...sugarbushKeys.all, 'list'] as const,
   list: () => [...sugarbushKeys.lists()] as const,
   details: () => [...sugarbushKeys.all, 'detail'] as const,

@@ -1,12 +1,7 @@
 import { cn } from '@/components/ui/cn';
 import { Field, controlClass } from '@/components/ui/field';
-import {
-  compassPoints,
-  nearestPoint,
-  pointDeg,
-  type CompassPoint,
-  type TapholeFormValues,
-} from './taphole-form-values';
+import { compassKeys, nearestPoint, pointDeg, type CompassPoint } from '@/lib/compass';
+import type { TapholeFormValues } from './taphole-form-values';
 
 type SideValues = Pick<TapholeFormValues, 'side' | 'exactDeg'>;
 
@@ -37,7 +32,7 @@ export function SideInput({
             <option value="" disabled>
               Choose
             </option>
-            {compassPoints.map((p) => (
+            {compassKeys.map((p) => (
               <option key={p} value={p}>
                 {p} ({pointDeg(p)}°)
               </option>

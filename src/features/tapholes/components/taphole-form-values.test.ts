@@ -3,11 +3,11 @@ import {
   emptyTapholeForm,
   heightText,
   inSystem,
-  nearestPoint,
   toTapholeInput,
   withSpot,
   type TapholeDefaults,
 } from './taphole-form-values';
+import { nearestPoint } from '@/lib/compass';
 
 const defaults: TapholeDefaults = {
   season: 2027,

@@ -2,15 +2,8 @@ import { normalizeAzimuth } from '@shared/rules/index';
 import type { Collection } from '@shared/schemas/enums';
 import { tapholeInputSchema, type TapholeInput } from '@shared/schemas/taphole';
 import { formatBitSize } from '@/features/advice/advice-words';
+import { nearestPoint, pointDeg, type CompassPoint } from '@/lib/compass';
 import { cmToIn, inToCm, parseDecimal, roundTo, type UnitSystem } from '@/lib/units';
-
-export const compassPoints = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'] as const;
-export type CompassPoint = (typeof compassPoints)[number];
-
-export const pointDeg = (point: CompassPoint) => compassPoints.indexOf(point) * 45;
-/** 200° → "S": the nearest of the eight points. */
-export const nearestPoint = (deg: number): CompassPoint =>
-  compassPoints[Math.round(normalizeAzimuth(deg) / 45) % compassPoints.length];
 
 /** The bits the trade sells, in cm to the last digit the fraction has (7/16 in = 1.11125 cm). */
 export const bitSizes = [5 / 16, 19 / 64, 7 / 16].map((inches) => roundTo(inToCm(inches), 7));

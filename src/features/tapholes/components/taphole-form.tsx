@@ -6,7 +6,7 @@ import { compassWord, formatHeight } from '@/features/advice/advice-words';
 import { isApiError } from '@/lib/api-client';
 import { todayIso, useUnitSystem } from '@/lib/units';
 import { useCreateTaphole } from '../api/create-taphole';
-import { collectionLabels } from '../lib/collection-labels';
+import { collectionLabels } from '@/lib/collection-labels';
 import { DrillInputs } from './drill-inputs';
 import { HeightInput } from './height-input';
 import { SideInput } from './side-input';

@@ -5,7 +5,7 @@ import { ErrorState } from '@/components/ui/error-state';
 import { TableSkeleton } from '@/components/ui/skeleton';
 import { formatBit, formatDate, formatLength, useUnitSystem, type LengthUnit } from '@/lib/units';
 import { useTapholes } from '../api/get-tapholes';
-import { collectionLabels } from '../lib/collection-labels';
+import { collectionLabels } from '@/lib/collection-labels';
 
 const compass = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];
 /** 200 → "200° SW". */

@@ -1,4 +1,5 @@
 import type { Species, TreeStatus } from '@shared/schemas/enums';
+import { queryRoots } from '@/lib/query-roots';
 
 export type TreeSort =
   'tag' | '-tag' | 'dbh' | '-dbh' | 'status' | '-status' | 'species' | '-species';
@@ -14,7 +15,7 @@ export interface TreeListFilters {
 }
 
 export const treeKeys = {
-  all: ['trees'] as const,
+  all: queryRoots.trees,
   lists: () => [...treeKeys.all, 'list'] as const,
   list: (sugarbushId: number, filters: TreeListFilters) =>
     [...treeKeys.lists(), sugarbushId, filters] as const,

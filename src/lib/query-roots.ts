@@ -1,0 +1,12 @@
+/**
+ * The first segment of every feature's query keys. A change that moves a whole stand's advice
+ * (its guideline, its sunny side) refreshes every feature by these prefixes, without one feature
+ * importing another's key factory.
+ */
+export const queryRoots = {
+  sugarbushes: ['sugarbushes'],
+  /** A tree's advice nests under its detail key, so this prefix covers the advice too. */
+  trees: ['trees'],
+  plans: ['plans'],
+  map: ['map'],
+} as const;
