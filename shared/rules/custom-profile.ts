@@ -43,28 +43,56 @@ export const CUSTOM_LIMITS = {
 } as const;
 
 const L = CUSTOM_LIMITS;
-const fmt = (cm: number) =>
-  `${Number(cm.toFixed(2))} cm (${Number((cm / CM_PER_IN).toFixed(2))} in)`;
 
-/** A number between two bounds, with one message naming both. */
-function between(min: number, max: number, message: string) {
-  return z
-    .number({ error: message })
-    .refine((v) => Number.isFinite(v) && v >= min - 1e-9 && v <= max + 1e-9, message);
-}
+/**
+ * A number between two bounds. The bounds carry no message of their own, so that a form can word
+ * them in the units it shows (`validateCustomProfile` words them in cm, with the reason).
+ */
+const between = (min: number, max: number) => z.number().min(min).max(max);
 
-const depthCm = between(
-  L.depth.minCm,
-  L.depth.maxCm,
-  `Drill ${fmt(L.depth.minCm)} to ${fmt(L.depth.maxCm)} deep, bark included`,
-);
-const bitCm = between(L.bit.minCm, L.bit.maxCm, 'A bit is 19/64 in to 7/16 in (0.7–1.12 cm) wide');
+/** Why each bound is where it is, for the messages `validateCustomProfile` gives. */
+const reasons: Record<string, string> = {
+  'spacing.sidewaysCm': 'no published spacing is closer than 1 in (2.54 cm) to the side',
+  'spacing.verticalCm': 'no published spacing is closer than 6 in (15.24 cm) up or down',
+  'heightBand.minCm': 'tapholes go about 30–200 cm above ground, in a band at least 30 cm tall',
+  'heightBand.maxCm': 'tapholes go about 30–200 cm above ground, in a band at least 30 cm tall',
+  depthCm: 'holes go 2.5–6.5 cm deep, bark included',
+  maxDepthCm: 'holes go 2.5–6.5 cm deep, bark included',
+  bitCm: 'bits run from 19/64 in to 7/16 in (0.7–1.12 cm)',
+  maxBitCm: 'bits run from 19/64 in to 7/16 in (0.7–1.12 cm)',
+  noneBelowCm: 'stressed trees under 12 in (30.48 cm) take none',
+  diebackPct: 'up to 10 % dieback is no decline; over 15 % is cause for concern',
+  restAtDiebackPct: 'up to 10 % dieback is no decline, so no tree is rested for less than 20 %',
+  barkCm: 'bark is 0.2–1.5 cm thick',
+  stainLengthCm: 'a stain column is 10–100 cm long',
+  stainMarginCm: 'stain reaches 0–3 cm beyond the bit',
+  zoneHeightCm: 'the tapping zone is 30–200 cm tall',
+  floor: `the clear-wood floor is 0.5–0.98; Clearwood’s calibrated value is ${defaultZone.floor}`,
+};
+
+const unitOf = (key: string) => (key.endsWith('Cm') ? ' cm' : key.endsWith('Pct') ? ' %' : '');
+
+/** Messages for the bounds the schema states plainly: "Use 2.54 cm or more: no published …". */
+const boundMessages: z.core.$ZodErrorMap = (issue) => {
+  const path = (issue.path ?? []).map(String);
+  const key = [...path].reverse().find((p) => Number.isNaN(Number(p))) ?? '';
+  const reason = reasons[path.join('.')] ?? reasons[key];
+  const tail = reason ? `: ${reason}` : '';
+  if (issue.code === 'invalid_type' && issue.expected === 'number') return 'Enter a number';
+  if (issue.code === 'too_small' && issue.origin === 'number')
+    return `Use ${Number(issue.minimum)}${unitOf(key)} or more${tail}`;
+  if (issue.code === 'too_big' && issue.origin === 'number')
+    return `Use ${Number(issue.maximum)}${unitOf(key)} or less${tail}`;
+  return undefined;
+};
+
+const depthCm = between(L.depth.minCm, L.depth.maxCm);
+const bitCm = between(L.bit.minCm, L.bit.maxCm);
 const drillSetting = z.object({ depthCm, bitCm });
 
 const base = profiles.conservative;
 const owner = 'Custom profile saved by the owner';
 
-/** A guideline set an owner saves for a sugarbush. Band edges are in `unit`; every other length in cm. */
 export const customProfileSchema = z
   .object({
     key: z
@@ -96,16 +124,8 @@ export const customProfileSchema = z
       .max(L.maxTaps, `At most ${L.maxTaps} bands: no guideline sets more than ${L.maxTaps} taps`),
     spacing: z.object(
       {
-        sidewaysCm: between(
-          L.spacing.minSidewaysCm,
-          L.spacing.maxSidewaysCm,
-          `Keep ${fmt(L.spacing.minSidewaysCm)} to ${fmt(L.spacing.maxSidewaysCm)} to the side: no published spacing is closer than 1 in`,
-        ),
-        verticalCm: between(
-          L.spacing.minVerticalCm,
-          L.spacing.maxVerticalCm,
-          `Keep ${fmt(L.spacing.minVerticalCm)} to ${fmt(L.spacing.maxVerticalCm)} up or down: no published spacing is closer than 6 in`,
-        ),
+        sidewaysCm: between(L.spacing.minSidewaysCm, L.spacing.maxSidewaysCm),
+        verticalCm: between(L.spacing.minVerticalCm, L.spacing.maxVerticalCm),
         rule: z
           .enum(['either', 'both'], { error: 'Read the spacing as either distance or both' })
           .default('either'),
@@ -114,16 +134,8 @@ export const customProfileSchema = z
     ),
     heightBand: z
       .object({
-        minCm: between(
-          L.heightBand.lowestCm,
-          L.heightBand.highestCm - L.heightBand.minTallCm,
-          `The lowest hole goes ${L.heightBand.lowestCm}–${L.heightBand.highestCm - L.heightBand.minTallCm} cm above ground`,
-        ),
-        maxCm: between(
-          L.heightBand.lowestCm + L.heightBand.minTallCm,
-          L.heightBand.highestCm,
-          `The highest hole goes ${L.heightBand.lowestCm + L.heightBand.minTallCm}–${L.heightBand.highestCm} cm above ground`,
-        ),
+        minCm: between(L.heightBand.lowestCm, L.heightBand.highestCm - L.heightBand.minTallCm),
+        maxCm: between(L.heightBand.lowestCm + L.heightBand.minTallCm, L.heightBand.highestCm),
       })
       .default(base.heightBand),
     drill: z
@@ -131,16 +143,8 @@ export const customProfileSchema = z
       .default(base.drill),
     limits: z
       .object({
-        maxDepthCm: between(
-          L.depth.minCm,
-          L.depth.maxCm,
-          `The deepest hole allowed is ${fmt(L.depth.minCm)} to ${fmt(L.depth.maxCm)}, bark included`,
-        ),
-        maxBitCm: between(
-          L.bit.minCm,
-          L.bit.maxCm,
-          'The widest bit allowed is 19/64 in to 7/16 in',
-        ),
+        maxDepthCm: between(L.depth.minCm, L.depth.maxCm),
+        maxBitCm: between(L.bit.minCm, L.bit.maxCm),
       })
       .default(base.limits),
     stressed: z
@@ -150,46 +154,18 @@ export const customProfileSchema = z
           .int('Taps are whole numbers')
           .min(0, 'A stressed tree takes 0 or 1 tap')
           .max(L.stressed.maxTaps, 'A stressed tree takes 0 or 1 tap (OMAFRA guidance)'),
-        noneBelowCm: between(
-          L.stressed.noneBelowMinCm,
-          L.stressed.noneBelowMaxCm,
-          `Stressed trees under at least ${fmt(L.stressed.noneBelowMinCm)} take none (OMAFRA guidance)`,
-        ),
-        diebackPct: between(
-          L.stressed.diebackMinPct,
-          L.stressed.diebackMaxPct,
-          `A tree counts as stressed from ${L.stressed.diebackMinPct}–${L.stressed.diebackMaxPct} % crown dieback`,
-        ),
-        restAtDiebackPct: between(
-          L.stressed.restMinPct,
-          100,
-          `Rest a tree from ${L.stressed.restMinPct}–100 % crown dieback, not less`,
-        ),
+        noneBelowCm: between(L.stressed.noneBelowMinCm, L.stressed.noneBelowMaxCm),
+        diebackPct: between(L.stressed.diebackMinPct, L.stressed.diebackMaxPct),
+        restAtDiebackPct: between(L.stressed.restMinPct, 100),
       })
       .default(base.stressed),
     zone: z
       .object({
-        barkCm: between(L.zone.barkCm[0], L.zone.barkCm[1], 'Bark is 0.2–1.5 cm thick'),
-        stainLengthCm: between(
-          L.zone.stainLengthCm[0],
-          L.zone.stainLengthCm[1],
-          'A stain column is 10–100 cm long',
-        ),
-        stainMarginCm: between(
-          L.zone.stainMarginCm[0],
-          L.zone.stainMarginCm[1],
-          'Stain reaches 0–3 cm beyond the bit',
-        ),
-        zoneHeightCm: between(
-          L.zone.zoneHeightCm[0],
-          L.zone.zoneHeightCm[1],
-          'The tapping zone is 30–200 cm tall',
-        ),
-        floor: between(
-          L.floor.min,
-          L.floor.max,
-          `The clear-wood floor is ${L.floor.min}–${L.floor.max} (Clearwood’s calibrated value is ${defaultZone.floor})`,
-        ),
+        barkCm: between(L.zone.barkCm[0], L.zone.barkCm[1]),
+        stainLengthCm: between(L.zone.stainLengthCm[0], L.zone.stainLengthCm[1]),
+        stainMarginCm: between(L.zone.stainMarginCm[0], L.zone.stainMarginCm[1]),
+        zoneHeightCm: between(L.zone.zoneHeightCm[0], L.zone.zoneHeightCm[1]),
+        floor: between(L.floor.min, L.floor.max),
       })
       .default(defaultZone),
     source: z.string().trim().min(1).max(300).default(owner),
@@ -266,7 +242,7 @@ function toProfile(p: CustomProfile): GuidelineProfile {
  * the checked set with its defaults, never the body as sent.
  */
 export function validateCustomProfile(input: unknown): CustomProfileResult {
-  const parsed = customProfileSchema.safeParse(input);
+  const parsed = customProfileSchema.safeParse(input, { error: boundMessages });
   if (!parsed.success) {
     // One message per field: the first, which names the bound that was broken.
     const errors = new Map<string, string>();

@@ -10,7 +10,7 @@ import { useTreeAdvice } from '../api/get-tree-advice';
 import { adviceSentence, drillWords, spotWords } from '../advice-words';
 import { parseSeason, seasonParam } from '../season';
 import { AdviceFigures } from './advice-figures';
-import { GuidelineNotice, RuleList } from './guideline-rules';
+import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
 import { LongRun } from './long-run';
 import { SeasonStepper } from './season-stepper';
 import { ShareProjectionChart } from './share-projection-chart';

@@ -2,7 +2,7 @@ import { in2ToCm2, publishedGrowth } from '@shared/rules/index';
 import type { TreeAdvice } from '@shared/schemas/plan';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 import { formatShare } from '../advice-words';
-import { WhyDisclosure } from './why-disclosure';
+import { WhyDisclosure } from '@/components/ui/why-disclosure';
 
 /** Basal-area growth a year, in² or cm². */
 function areaPerYear(in2: number, system: UnitSystem): string {

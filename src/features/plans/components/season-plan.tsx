@@ -5,7 +5,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Pager, pageRange } from '@/components/ui/pager';
 import { Skeleton, TableSkeleton } from '@/components/ui/skeleton';
 import { UnitToggle } from '@/components/ui/unit-toggle';
-import { GuidelineNotice, RuleList } from '@/features/advice/components/guideline-rules';
+import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
 import { SeasonStepper } from '@/features/advice/components/season-stepper';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
 import { TreeListEmpty } from '@/features/trees/components/tree-list-empty';
