@@ -80,6 +80,7 @@ export function growTree(key: string, spec: TreeSpec, lastSeason: number): Growt
       dbhCm: round(autumnDbh[s] + error + slip, 1),
       crownDiebackPct: dieback[s],
       note: spec.measurementNotes[s] ?? null,
+      confirmedOutlier: spec.measureOffset?.from === s,
     });
   }
   return { autumnDbh, springDbh, dieback, measurements };

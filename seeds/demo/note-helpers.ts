@@ -1,3 +1,4 @@
+import { minimumSustainableGrowth } from '../../shared/rules/index';
 import type { NoteCategory } from '../../shared/schemas/enums';
 import type { TreePlan } from './types';
 
@@ -23,15 +24,18 @@ export function growthCmPerYear(p: TreePlan): number {
 }
 
 /**
- * Basal-area growth in in²/yr over the record, and the minimum at that size: 1.4 in²/yr at 10 in
- * and 2.6 in²/yr at 18 in, straight line between and beyond (van den Berg, Perkins, Isselhardt,
- * Wilmot 2016, Forest Science 62(1) — P; beyond 18 in it is an extrapolation).
+ * Basal-area growth in in²/yr over the record, and what `taps` a year need at that size by the
+ * advisor's tapping-zone model (calibrated to the 2016 Forest Science figures: one tap at 10 in
+ * about 1.4 in²/yr, two at 18 in about 2.6).
  */
-export function basalArea(p: TreePlan): { grew: number; needed: number } {
+export function basalArea(p: TreePlan, taps = 1): { grew: number; needed: number } {
   const a = p.measurements[0].dbhCm / IN;
   const b = latest(p).dbhCm / IN;
   const years = latest(p).season - p.measurements[0].season;
-  return { grew: ((Math.PI / 4) * (b * b - a * a)) / years, needed: 1.4 + ((b - 10) * 1.2) / 8 };
+  return {
+    grew: ((Math.PI / 4) * (b * b - a * a)) / years,
+    needed: minimumSustainableGrowth({ dbhCm: latest(p).dbhCm, tapsPerYear: taps }),
+  };
 }
 
 export const note = (category: NoteCategory, body: string, followUpOn: string | null = null) => ({

@@ -29,8 +29,11 @@ export const DEMO_PROBLEM_TAGS: Record<ProblemCategory, string[]> = {
   'first-reading': ol(1182, 1184, 1186),
   // An old 7/16 in bit found its way back into the kit in 2025.
   'wide-spout': ol(1031, 1037, 1043),
-  // A new crew member has taped these above the butt swell since 2022: every reading runs low.
+  // A new crew member has taped these above the butt swell since 2022: every reading runs low,
+  // and the first low one was confirmed on the spot.
   'misread-series': ol(1052, 1058, 1064),
+  // On the dry knoll: growing, but not enough to carry the two taps their size allows.
+  'modest-growth': ol(128, 366, 694),
 };
 
 export function problemOf(tag: string): ProblemCategory | null {
@@ -158,6 +161,11 @@ export function applyProblem(
       t.rate = rng.range(0.2, 0.25);
       t.noiseSd = 0.05;
       t.measureOffset = { from: 2022, cm: -3 };
+      break;
+    case 'modest-growth':
+      t.dbhStart = rng.range(47, 54);
+      t.rate = rng.range(0.11, 0.14);
+      t.noiseSd = 0.05;
       break;
     case 'first-reading':
       t.firstSeason = lastSeason;

@@ -78,8 +78,8 @@ export const writers: Record<ProblemCategory, Writer> = {
       note(
         'finding',
         `Diameter gained only ${growthCmPerYear(p).toFixed(2)} cm a year since 2018: about ` +
-          `${ba.grew.toFixed(1)} in² of basal area a year, against roughly ${ba.needed.toFixed(1)} ` +
-          `in² on the 2016 minimum-growth line at this size. Tapping is outrunning growth.`,
+          `${ba.grew.toFixed(1)} in² of basal area a year, against the roughly ` +
+          `${ba.needed.toFixed(1)} in² even one tap needs at this size. Tapping is outrunning growth.`,
       ),
     ];
   },
@@ -178,10 +178,23 @@ export const writers: Record<ProblemCategory, Writer> = {
   'misread-series': () => [
     note(
       'follow-up',
-      `Readings since 2022 run about 3 cm under the earlier ones. Check where the tape goes: ` +
+      `Readings since 2022 run about 3 cm under the earlier ones; the first was confirmed at ` +
+        `the tree, so the record now reads as a shrinking trunk. Check where the tape goes: ` +
         `4.5 ft up the uphill side, not above the swell. Re-measure and correct the rows.`,
     ),
   ],
+  'modest-growth': (p) => {
+    const one = basalArea(p, 1);
+    const two = basalArea(p, 2);
+    return [
+      note(
+        'advice',
+        `About ${one.grew.toFixed(1)} in² of basal area a year: enough for one tap ` +
+          `(${one.needed.toFixed(1)} in²), not the two its size allows (${two.needed.toFixed(1)} ` +
+          `in²). One tap in 2027, and thin around it to give the crown room.`,
+      ),
+    ];
+  },
   'first-reading': () => [
     note(
       'advice',
@@ -210,4 +223,5 @@ export const NOTED: Record<ProblemCategory, number> = {
   'first-reading': 1,
   'wide-spout': 1,
   'misread-series': 1,
+  'modest-growth': 1,
 };

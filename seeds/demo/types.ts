@@ -19,6 +19,7 @@ export const problemCategories = [
   'first-reading',
   'wide-spout',
   'misread-series',
+  'modest-growth',
 ] as const;
 export type ProblemCategory = (typeof problemCategories)[number];
 
@@ -60,7 +61,10 @@ export interface TreeSpec {
   wideSpoutFrom: number | null;
   /** From this season on, the first hole is drilled right beside last season's. */
   sloppyFrom: number | null;
-  /** From season `from` on every reading is off by `cm` (taken at the wrong height). */
+  /**
+   * From season `from` on every reading is off by `cm` (taken at the wrong height); the first
+   * such reading was confirmed by the forester when it was entered.
+   */
   measureOffset: { from: number; cm: number } | null;
   /** A reading error of `cm` (negative: too small) in one season. */
   measureError: { season: number; cm: number } | null;
@@ -75,6 +79,8 @@ export interface MeasurementRow {
   dbhCm: number;
   crownDiebackPct: number;
   note: string | null;
+  /** The forester confirmed this reading although it is far off the one before. */
+  confirmedOutlier: boolean;
 }
 
 export interface TapholeRow {

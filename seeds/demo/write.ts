@@ -88,6 +88,7 @@ async function writeStand(
         dbh_cm: m.dbhCm,
         crown_dieback_pct: m.crownDiebackPct,
         note: m.note,
+        confirmed_outlier: m.confirmedOutlier,
         recorded_by: forester,
         created_at: stamp(m.measuredOn, '16:30:00'),
       })),

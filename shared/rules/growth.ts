@@ -3,6 +3,8 @@ import { fractionalYear, seasonOf } from './dates';
 export interface DatedDbh {
   measuredOn: string;
   dbhCm: number;
+  /** A forester confirmed this reading: it is never left out as far off the line. */
+  confirmedOutlier?: boolean | null;
 }
 
 export type GrowthFlag = 'shrinking' | 'outlier-dropped';
@@ -90,6 +92,7 @@ function findOutlier(points: readonly Point[]): number {
   let worstError = 0;
   let worstScatter = 0;
   for (let i = 0; i < points.length; i++) {
+    if (points[i].source.confirmedOutlier === true) continue;
     const line = fit(points, i);
     const error = Math.abs(points[i].y - (line.intercept + line.slope * points[i].t));
     if (error > worstError) {

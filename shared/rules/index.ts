@@ -12,8 +12,11 @@ export {
 } from './profiles';
 export type {
   GuidelineProfile,
+  GuidelineRule,
   TapBand,
   DrillSetting,
+  ProfileSpacing,
+  SpacingRule,
   StressedTreeRules,
   ZoneParams,
 } from './profile-types';
@@ -22,6 +25,7 @@ export {
   customProfileSchema,
   validateCustomProfile,
   CUSTOM_LIMITS,
+  type CustomProfile,
   type CustomProfileInput,
   type CustomProfileResult,
 } from './custom-profile';
@@ -55,14 +59,20 @@ export {
 } from './units';
 export { seasonOf, fractionalYear } from './dates';
 export { growth, type Growth, type GrowthFlag, type DatedDbh } from './growth';
+export { publishedGrowth } from './minimum-growth';
 export {
-  minimumBasalAreaGrowthIn2,
-  minimumGrowthLine,
-  healthyGrowthLine,
-  type GrowthLinePoint,
-} from './minimum-growth';
+  checkReading,
+  checkNewReading,
+  screenReadings,
+  readingQuestion,
+  OUTLIER_CHANGE_CM_PER_YEAR,
+  OUTLIER_SHRINK_CM,
+  type DatedReading,
+  type ReadingCheck,
+} from './plausibility';
 export {
   conductiveShare,
+  holesInReach,
   steadyStateShare,
   minimumSustainableGrowth,
   minimumSustainableRadialGrowth,
@@ -82,18 +92,30 @@ export {
   type ProjectionInput,
   type ProjectedSeason,
 } from './zone-projection';
-export { isClearOf, arcDistanceCm, type Spot, type Spacing } from './spacing';
+export {
+  isClearOf,
+  isInStainColumn,
+  keepsClear,
+  arcDistanceCm,
+  type Spot,
+  type HoleSpot,
+  type Spacing,
+  type SpacingRules,
+  type StainColumn,
+} from './spacing';
 export {
   placeTapholes,
   SAME_SEASON_HEIGHT_GAP_CM,
   type PlacementInput,
   type PlacementResult,
 } from './placement';
-export { adviseDrilling, SHALLOW_DEPTH_CM, WIDE_SPOUT_BIT_CM } from './drilling';
+export { adviseDrilling, FROZEN_TRUNK_C, SHALLOW_DEPTH_CM, WIDE_SPOUT_BIT_CM } from './drilling';
 export {
   adviseTree,
   STALE_AFTER_SEASONS,
   ASSUMED_RADIAL_GROWTH_CM,
+  LONG_REACH_SEASONS,
+  FAST_GROWER_DBH_CM_PER_YEAR,
   type Advice,
   type AdviseOptions,
 } from './advise-tree';
@@ -106,5 +128,5 @@ export {
   type StandPlan,
 } from './plan-stand';
 export { verdicts, verdictByKey, type VerdictKey, type Verdict } from './verdicts';
-export { warningCodes, type WarningCode, type AdvisorWarning } from './warnings';
+export { warningCodes, bitWords, type WarningCode, type AdvisorWarning } from './warnings';
 export { sources } from './sources';

@@ -1,4 +1,13 @@
-import { isClearOf, type Spacing, type Spot } from './spacing';
+import {
+  keepsClear,
+  spacingBoxes,
+  stainColumnBox,
+  type HoleSpot,
+  type KeepOutBox,
+  type Spacing,
+  type Spot,
+  type StainColumn,
+} from './spacing';
 import { normalizeAzimuth } from './units';
 
 /**
@@ -6,15 +15,20 @@ import { normalizeAzimuth } from './units';
  * (wrapping round in azimuth) and as tall as the height band. The first hole goes as near the
  * sunny side as it can, further holes are spread evenly round from it (the second opposite) at
  * other heights; each keeps the profile's spacing from every hole still in reach and from the
- * others of the season. Candidates are tried nearest first, so the result is deterministic.
+ * others of the season, and stays out of every such hole's stain column. Candidates are tried
+ * nearest first, so the result is deterministic.
  */
 
 export interface PlacementInput {
   dbhCm: number;
   taps: number;
   /** Holes of earlier seasons whose stain is still within a new hole's reach. */
-  holesInReach: readonly Spot[];
+  holesInReach: readonly HoleSpot[];
   spacing: Spacing;
+  /** The stain column each hole leaves (the zone model's); no column check when omitted. */
+  column?: StainColumn;
+  /** Bit of the new holes (sets how far their own wood reaches); 5/16 in when omitted. */
+  bitCm?: number;
   heightBand: { minCm: number; maxCm: number };
   sunnyAzimuthDeg: number;
 }
@@ -24,6 +38,9 @@ export interface PlacementResult {
   /** True when fewer holes could be placed than asked for. */
   blocked: boolean;
 }
+
+/** 5/16 in, the bit of new holes when none is given. */
+const NEW_BIT_CM = 0.79375;
 
 /** Holes of one season sit at heights at least this far apart (a different height each). */
 export const SAME_SEASON_HEIGHT_GAP_CM = 10;
@@ -106,7 +123,7 @@ function signedArc(fromDeg: number, toDeg: number, circumference: number): numbe
  */
 function findSpot(
   target: Spot,
-  blockers: readonly Spot[],
+  blockers: readonly HoleSpot[],
   sameSeason: readonly Spot[],
   input: PlacementInput,
   circumference: number,
@@ -138,29 +155,37 @@ function findSpot(
   blocked.fill(0, 0, cells);
   const arcMargin = circumference / 7200 + 0.01;
   const rowMargin = 0.06;
-  const reachX = spacing.sidewaysCm - arcMargin;
-  const reachY = spacing.verticalCm - rowMargin;
-  const gap = SAME_SEASON_HEIGHT_GAP_CM - rowMargin;
-  const rects = blockers.length + sameSeason.length;
-  for (let k = 0; k < rects; k++) {
-    const isBlocker = k < blockers.length;
-    const hole = isBlocker ? blockers[k] : sameSeason[k - blockers.length];
+  const bit = input.bitCm ?? NEW_BIT_CM;
+  const spacingBox = spacingBoxes(input.spacing);
+  const boxesOf = (hole: HoleSpot): KeepOutBox[] =>
+    input.column ? [...spacingBox, stainColumnBox(hole.bitCm, bit, input.column)] : spacingBox;
+  const mark = (hole: Spot, box: KeepOutBox) => {
+    const reachX = box.halfArcCm - arcMargin;
+    const rise = box.halfHeightCm - rowMargin;
+    if (reachX <= 0 || rise <= 0) return;
     const dy = hole.heightCm - target.heightCm;
-    const rise = isBlocker ? reachY : gap;
     const b0 = Math.max(bMin, Math.ceil((dy - rise) / rowCm));
     const b1 = Math.min(bMax, Math.floor((dy + rise) / rowCm));
-    if (b0 > b1 || (isBlocker && reachX <= 0)) continue;
+    if (b0 > b1) return;
     const x = signedArc(target.azimuthDeg, hole.azimuthDeg, circumference);
     for (let turn = -1; turn <= 1; turn++) {
       const centre = x + turn * circumference;
-      const a0 = isBlocker ? Math.max(aMin, Math.ceil((centre - reachX) / colCm)) : aMin;
-      const a1 = isBlocker ? Math.min(aMax, Math.floor((centre + reachX) / colCm)) : aMax;
+      const a0 = Math.max(aMin, Math.ceil((centre - reachX) / colCm));
+      const a1 = Math.min(aMax, Math.floor((centre + reachX) / colCm));
       for (let b = b0; b <= b1; b++) {
         const row = (b - bMin) * width - aMin;
         for (let a = a0; a <= a1; a++) blocked[row + a] = 1;
       }
-      if (!isBlocker) break;
     }
+  };
+  for (const hole of blockers) for (const box of boxesOf(hole)) mark(hole, box);
+  // Holes of one season keep different heights all round the trunk.
+  const gap = SAME_SEASON_HEIGHT_GAP_CM - rowMargin;
+  for (const hole of sameSeason) {
+    const dy = hole.heightCm - target.heightCm;
+    const b0 = Math.max(bMin, Math.ceil((dy - gap) / rowCm));
+    const b1 = Math.min(bMax, Math.floor((dy + gap) / rowCm));
+    for (let b = b0; b <= b1; b++) blocked.fill(1, (b - bMin) * width, (b - bMin + 1) * width);
   }
   let free = 0;
   for (let i = 0; i < cells; i++) free += 1 - blocked[i];
@@ -172,7 +197,8 @@ function findSpot(
     );
     if (azimuthDeg >= 360) azimuthDeg = 0;
     const spot = { azimuthDeg, heightCm };
-    for (const h of blockers) if (!isClearOf(spot, h, spacing, circumference)) return null;
+    const rules = { spacing, column: input.column };
+    for (const h of blockers) if (!keepsClear(spot, bit, h, rules, circumference)) return null;
     for (const h of sameSeason)
       if (Math.abs(h.heightCm - heightCm) < SAME_SEASON_HEIGHT_GAP_CM) return null;
     return spot;
@@ -216,7 +242,7 @@ export function placeTapholes(input: PlacementInput): PlacementResult {
   const circumference = Math.PI * input.dbhCm;
   const wanted = Math.max(0, Math.floor(input.taps));
   if (wanted === 0 || !(circumference > 0)) return { placements: [], blocked: false };
-  const blockers: Spot[] = [...input.holesInReach];
+  const blockers: HoleSpot[] = [...input.holesInReach];
   const placements: Spot[] = [];
   let firstAzimuth = normalizeAzimuth(input.sunnyAzimuthDeg);
   for (let i = 0; i < wanted; i++) {
@@ -229,7 +255,7 @@ export function placeTapholes(input: PlacementInput): PlacementResult {
     if (!spot) break;
     if (i === 0) firstAzimuth = spot.azimuthDeg;
     placements.push(spot);
-    blockers.push(spot);
+    blockers.push({ ...spot, bitCm: input.bitCm ?? NEW_BIT_CM });
   }
   return { placements, blocked: placements.length < wanted };
 }

@@ -41,17 +41,39 @@ export interface ZoneParams {
   floor: number;
 }
 
+/**
+ * How a spacing is read. `either`: a new hole is clear of an old one with at least the sideways
+ * spacing of bark arc OR the vertical spacing of height between them ("2–4 in to the side or
+ * 6–12 in above/below"). `both`: the diagonal step ("3 in over and 6 in up"): near an old hole
+ * both distances are required (docs/decisions/001-tapping-zone-model.md).
+ */
+export type SpacingRule = 'either' | 'both';
+
+export interface ProfileSpacing {
+  sidewaysCm: number;
+  verticalCm: number;
+  rule: SpacingRule;
+}
+
+/** A rule of the guideline that is not a figure the advisor computes with, shown where it applies. */
+export interface GuidelineRule {
+  text: string;
+  source: string;
+}
+
 export interface GuidelineProfile {
   key: string;
   label: string;
   /** The unit the guideline table is written in. */
   unit: 'in' | 'cm';
+  /** The table reads DBH to this step (Quebec writes its edges to 0.1 cm: 23.0 is none, 23.1 one). */
+  dbhStepCm?: number;
   /** Ascending lower edges; the first band is the smallest tappable size. */
   bands: TapBand[];
   minimumDbhCm: number;
   maxTaps: number;
-  /** Rectangle rule: a new hole is clear of an old one if at least `sidewaysCm` of bark arc OR `verticalCm` of height lies between them. */
-  spacing: { sidewaysCm: number; verticalCm: number };
+  /** Distance a new hole keeps from every hole still in reach, read as `rule` says. */
+  spacing: ProfileSpacing;
   heightBand: { minCm: number; maxCm: number };
   drill: Record<Collection, DrillSetting>;
   /** Deepest drilled depth (incl. bark) and widest bit the guideline allows. */
@@ -65,4 +87,8 @@ export interface GuidelineProfile {
   depthSource: string;
   /** Where the spacing, depth and stressed-tree figures come from. */
   notes: string[];
+  /** Rules for the season as a whole (when to tap, when spouts come out): shown with the plan. */
+  seasonRules: GuidelineRule[];
+  /** Rules for drilling each hole: shown with the drilling advice. */
+  drillingRules: GuidelineRule[];
 }

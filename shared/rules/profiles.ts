@@ -53,8 +53,13 @@ function inchBands(rows: [number, number][], fastGrowerTop = false): TapBand[] {
   }));
 }
 
-function make(p: Omit<GuidelineProfile, 'minimumDbhCm' | 'maxTaps'>): GuidelineProfile {
+function make(
+  p: Omit<GuidelineProfile, 'minimumDbhCm' | 'maxTaps' | 'seasonRules' | 'drillingRules'> &
+    Partial<Pick<GuidelineProfile, 'seasonRules' | 'drillingRules'>>,
+): GuidelineProfile {
   return {
+    seasonRules: [],
+    drillingRules: [],
     ...p,
     minimumDbhCm: p.bands[0].fromCm,
     maxTaps: p.bands[p.bands.length - 1].taps,
@@ -65,6 +70,56 @@ const spacingNote = `Spacing: ${sources.uvmSpacing} (2–4 in to the side or 6�
 const stressedNote = `Stressed trees at most 1 tap, none under 12 in; 7/16 in spouts at most 1 tap: ${sources.omafra}`;
 const heightNote = 'Height band about 2–5 ft above ground: common practice / from memory';
 
+/**
+ * What both Quebec tables share: DBH at 1.30 m read to 0.1 cm, none up to 23 cm, one from
+ * 23.1 cm, two from 39.1 cm, and the conditions of the regulation (1 January – 30 April, bit at
+ * most 11 mm, at most 6 cm deep with bark, holes spread evenly, spouts out by 1 June).
+ */
+const quebec = {
+  unit: 'cm' as const,
+  dbhStepCm: 0.1,
+  bands: [
+    { from: 23.1, fromCm: 23.1, taps: 1 },
+    { from: 39.1, fromCm: 39.1, taps: 2 },
+  ],
+  spacing: { sidewaysCm: 10, verticalCm: 30, rule: 'either' as const },
+  heightBand,
+  drill: {
+    vacuum: { depthCm: 5, bitCm: SPOUT_5_16_CM },
+    gravity: { depthCm: 5, bitCm: SPOUT_5_16_CM },
+    bucket: { depthCm: 5, bitCm: SPOUT_5_16_CM },
+  },
+  limits: { maxDepthCm: 6, maxBitCm: 1.1 },
+  stressed: stressedOmafra,
+  zone: defaultZone,
+  spacingSource: sources.uvmSpacing,
+  depthSource: sources.quebecConditions,
+  notes: [
+    'DBH measured at 1.30 m above the highest ground level',
+    `${spacingNote}, the wider ends rounded to 10 cm and 30 cm`,
+    stressedNote,
+    heightNote,
+  ],
+  seasonRules: [
+    {
+      text: 'Tap once a year, only between 1 January and 30 April.',
+      source: sources.quebecConditions,
+    },
+    {
+      text: 'Pull every spout by 1 June at the latest, without tearing the bark.',
+      source: sources.quebecConditions,
+    },
+  ],
+  drillingRules: [
+    { text: 'Use a bit of at most 11 mm.', source: sources.quebecConditions },
+    { text: 'Drill at most 6 cm deep, bark included.', source: sources.quebecConditions },
+    {
+      text: 'Where a tree takes two holes or more, spread them evenly around the trunk.',
+      source: sources.quebecConditions,
+    },
+  ],
+};
+
 export const profiles = {
   conservative: make({
     key: 'conservative',
@@ -74,7 +129,7 @@ export const profiles = {
       [12, 1],
       [18, 2],
     ]),
-    spacing: { sidewaysCm: inToCm(4), verticalCm: inToCm(12) },
+    spacing: { sidewaysCm: inToCm(4), verticalCm: inToCm(12), rule: 'either' },
     heightBand,
     drill: drill(1.75, 2),
     limits: { maxDepthCm: inToCm(2.5), maxBitCm: inToCm(7 / 16) },
@@ -100,7 +155,7 @@ export const profiles = {
       [20, 3],
       [25, 4],
     ]),
-    spacing: { sidewaysCm: inToCm(3), verticalCm: inToCm(6) },
+    spacing: { sidewaysCm: inToCm(3), verticalCm: inToCm(6), rule: 'both' },
     heightBand,
     drill: drill(2, 2.5),
     limits: { maxDepthCm: inToCm(2.5), maxBitCm: inToCm(7 / 16) },
@@ -110,7 +165,7 @@ export const profiles = {
     spacingSource: sources.ohioSpacing,
     depthSource: sources.perkins,
     notes: [
-      `Spacing: ${sources.ohioSpacing} (3 in over and 6 in up/down)`,
+      `Spacing: ${sources.ohioSpacing} (3 in over and 6 in up or down, both distances: a diagonal step)`,
       `Depth: ${sources.perkins} (2.0 in on vacuum, up to 2.5 in on gravity)`,
       stressedNote,
       heightNote,
@@ -127,7 +182,7 @@ export const profiles = {
       ],
       true,
     ),
-    spacing: { sidewaysCm: inToCm(4), verticalCm: inToCm(12) },
+    spacing: { sidewaysCm: inToCm(4), verticalCm: inToCm(12), rule: 'either' },
     heightBand,
     drill: drill(2, 2),
     limits: { maxDepthCm: inToCm(2), maxBitCm: inToCm(7 / 16) },
@@ -153,7 +208,7 @@ export const profiles = {
       [18, 2],
       [24, 3],
     ]),
-    spacing: { sidewaysCm: inToCm(4), verticalCm: inToCm(12) },
+    spacing: { sidewaysCm: inToCm(4), verticalCm: inToCm(12), rule: 'either' },
     heightBand,
     drill: drill(2, 2),
     limits: { maxDepthCm: inToCm(2), maxBitCm: inToCm(7 / 16) },
@@ -169,31 +224,18 @@ export const profiles = {
       heightNote,
     ],
   }),
+  'quebec-private': make({
+    key: 'quebec-private',
+    label: 'Quebec private land (sugar-bush plan standard)',
+    ...quebec,
+    source: sources.quebecPrivate,
+  }),
   'quebec-public': make({
     key: 'quebec-public',
-    label: 'Quebec public land',
-    unit: 'cm',
-    bands: [20, 40, 60, 80].map((from, i) => ({ from, fromCm: from, taps: i + 1 })),
-    spacing: { sidewaysCm: 10, verticalCm: 30 },
-    heightBand,
-    drill: {
-      vacuum: { depthCm: 5, bitCm: SPOUT_5_16_CM },
-      gravity: { depthCm: 5, bitCm: SPOUT_5_16_CM },
-      bucket: { depthCm: 5, bitCm: SPOUT_5_16_CM },
-    },
-    limits: { maxDepthCm: 6, maxBitCm: 1.1 },
-    stressed: stressedOmafra,
-    zone: defaultZone,
-    source: sources.quebec,
-    spacingSource: sources.uvmSpacing,
-    depthSource: sources.quebec,
-    notes: [
-      `Depth at most 6 cm and bit at most 11 mm; holes spread evenly around the trunk: ${sources.quebec}`,
-      'DBH measured at 1.30 m',
-      `${spacingNote}, the wider ends rounded to 10 cm and 30 cm`,
-      stressedNote,
-      heightNote,
-    ],
+    label: 'Quebec public land (forest management permits)',
+    ...quebec,
+    source: sources.quebecPublic,
+    notes: [...quebec.notes, sources.quebecPublicUntil2022],
   }),
 } satisfies Record<string, GuidelineProfile>;
 

@@ -11,7 +11,8 @@ describe('tapsForDbh', () => {
     for (const p of Object.values(profiles)) {
       for (const band of p.bands) {
         expect(tapsForDbh(band.fromCm, p)).toBe(band.taps);
-        expect(tapsForDbh(band.fromCm - 0.01, p)).toBe(band.taps - 1);
+        // One reading step below the edge: 0.01 cm, or 0.1 cm where the table is read to 0.1 cm.
+        expect(tapsForDbh(band.fromCm - (p.dbhStepCm ?? 0.01), p)).toBe(band.taps - 1);
       }
     }
   });
@@ -29,6 +30,11 @@ describe('tapsForDbh', () => {
   it('finds the band row for a size', () => {
     expect(bandForDbh(46, 'ontario-vacuum')?.fullOnlyForHealthyFastGrowers).toBe(true);
     expect(bandForDbh(20, 'ontario-vacuum')).toBeNull();
+  });
+
+  it('reads a table written to 0.1 cm at that step: 23.04 cm is 23.0, 23.06 cm is 23.1', () => {
+    expect(tapsForDbh(23.04, 'quebec-private')).toBe(0);
+    expect(tapsForDbh(23.06, 'quebec-private')).toBe(1);
   });
 
   it('refuses an unknown profile key', () => {

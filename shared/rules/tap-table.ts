@@ -8,8 +8,11 @@ import { CM_PER_IN } from './units';
  */
 const EDGE_TOLERANCE = 1e-9;
 
+/** The DBH as the table reads it: in its unit, and to its step where it names one (Quebec: 0.1 cm). */
 function inTableUnit(dbhCm: number, profile: GuidelineProfile): number {
-  return profile.unit === 'in' ? dbhCm / CM_PER_IN : dbhCm;
+  const step = profile.dbhStepCm;
+  const read = step ? Math.round(dbhCm / step) * step : dbhCm;
+  return profile.unit === 'in' ? read / CM_PER_IN : read;
 }
 
 /** The table row a DBH falls in, or null below the smallest tappable size. */

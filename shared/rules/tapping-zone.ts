@@ -41,6 +41,25 @@ export function woodDepthCm(depthCm: number | undefined, zone: ZoneParams): numb
   return Math.max(0, (depthCm ?? DEFAULT_DEPTH_CM) - zone.barkCm);
 }
 
+/**
+ * Holes drilled before `season` whose stain a new hole of this depth can still reach: growth
+ * has not yet laid `woodDepth` of clear wood over them (g · k < d). New holes are spaced from
+ * these, and kept out of their stain columns.
+ */
+export function holesInReach<H extends ZoneHole>(
+  holes: readonly H[],
+  options: {
+    season: number;
+    depthCm: number;
+    radialGrowthCmPerYear: number;
+    zone?: Partial<ZoneParams>;
+  },
+): H[] {
+  const depth = woodDepthCm(options.depthCm, zoneParams(options.zone));
+  const g = Math.max(0, options.radialGrowthCmPerYear);
+  return holes.filter((h) => h.season < options.season && g * (options.season - h.season) < depth);
+}
+
 /** π(R² − (R − d)²) · H with R = DBH / 2. */
 export function zoneVolumeCm3(dbhCm: number, woodDepth: number, zone: ZoneParams): number {
   const r = dbhCm / 2;

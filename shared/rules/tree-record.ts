@@ -1,5 +1,6 @@
 import type { Collection, Species, TreeStatus } from '../schemas/enums';
 import { seasonOf } from './dates';
+import { screenReadings, type ReadingCheck } from './plausibility';
 import type { GuidelineProfile } from './profile-types';
 import { tapsForDbh } from './tap-table';
 import { WIDE_SPOUT_BIT_CM } from './drilling';
@@ -8,6 +9,8 @@ export interface AdvisorMeasurement {
   measuredOn: string;
   dbhCm: number;
   crownDiebackPct?: number | null;
+  /** A forester confirmed this DBH although it is far off the reading before it. */
+  confirmedOutlier?: boolean | null;
 }
 
 export interface AdvisorTaphole {
@@ -30,33 +33,34 @@ export interface AdvisorTree {
 
 /** What the advisor reads off a tree's record for one season: only what was known before it. */
 export interface TreeRecord {
+  /** Believable readings up to and including the season, by date. */
   measurements: AdvisorMeasurement[];
+  /** Unconfirmed readings far off the one before: left out of everything the advice uses. */
+  leftOut: { reading: AdvisorMeasurement; check: ReadingCheck }[];
   latest: AdvisorMeasurement | null;
   latestSeason: number | null;
-  diebackPct: number | null;
+  /** The latest crown rating and the season it was given in. */
+  crown: { diebackPct: number; season: number } | null;
   priorHoles: AdvisorTaphole[];
   lastTappedSeason: number | null;
   lastSeasonHoles: AdvisorTaphole[];
   collection: Collection;
-  lastBitCm: number | null;
 }
 
 /**
- * Measurements up to and including the season (sorted by date) and tapholes of earlier seasons.
- * Holes already recorded for the season itself are what the plan is checked against, not input.
+ * Measurements up to and including the season (sorted by date, unconfirmed outliers set aside)
+ * and tapholes of earlier seasons. Holes already recorded for the season itself are what the
+ * plan is checked against, not input.
  */
 export function readRecord(tree: AdvisorTree, season: number, collection?: Collection): TreeRecord {
-  const measurements = tree.measurements
-    .filter((m) => seasonOf(m.measuredOn) <= season)
-    .sort((a, b) => (a.measuredOn < b.measuredOn ? -1 : a.measuredOn > b.measuredOn ? 1 : 0));
-  const latest = measurements.length > 0 ? measurements[measurements.length - 1] : null;
-  let diebackPct: number | null = null;
-  for (let i = measurements.length - 1; i >= 0; i--) {
-    const value = measurements[i].crownDiebackPct;
-    if (value !== null && value !== undefined) {
-      diebackPct = value;
-      break;
-    }
+  const known = tree.measurements.filter((m) => seasonOf(m.measuredOn) <= season);
+  const { accepted, leftOut } = screenReadings(known);
+  const latest = accepted.length > 0 ? accepted[accepted.length - 1] : null;
+  let crown: TreeRecord['crown'] = null;
+  for (const m of [...known].sort((a, b) => (a.measuredOn < b.measuredOn ? -1 : 1))) {
+    const value = m.crownDiebackPct;
+    if (value !== null && value !== undefined)
+      crown = { diebackPct: value, season: seasonOf(m.measuredOn) };
   }
   const priorHoles: AdvisorTaphole[] = [];
   let lastTappedSeason: number | null = null;
@@ -68,25 +72,34 @@ export function readRecord(tree: AdvisorTree, season: number, collection?: Colle
   const lastSeasonHoles = priorHoles.filter((h) => h.season === lastTappedSeason);
   const lastHole = lastSeasonHoles.length > 0 ? lastSeasonHoles[lastSeasonHoles.length - 1] : null;
   return {
-    measurements,
+    measurements: accepted,
+    leftOut,
     latest,
     latestSeason: latest ? seasonOf(latest.measuredOn) : null,
-    diebackPct,
+    crown,
     priorHoles,
     lastTappedSeason,
     lastSeasonHoles,
     collection: collection ?? lastHole?.collection ?? 'vacuum',
-    lastBitCm: lastHole ? Math.max(...lastSeasonHoles.map((h) => h.bitCm)) : null,
   };
 }
 
-/** Taps the table allowed in the last tapped season, at the DBH known then; null if never tapped. */
+/** The latest believable DBH measured before a season began (before 1 January of it). */
+export function dbhBefore(record: TreeRecord, season: number): number | null {
+  let dbh: number | null = null;
+  for (const m of record.measurements) if (seasonOf(m.measuredOn) < season) dbh = m.dbhCm;
+  return dbh;
+}
+
+/**
+ * Taps the table allowed in the last tapped season, at the DBH measured before that season
+ * (1 where its holes were drilled for 7/16 in spouts); null if never tapped or not measured
+ * before it.
+ */
 export function allowedInLastSeason(record: TreeRecord, profile: GuidelineProfile): number | null {
-  if (record.lastTappedSeason === null || record.measurements.length === 0) return null;
-  let dbhThen = record.measurements[0].dbhCm;
-  for (const m of record.measurements) {
-    if (seasonOf(m.measuredOn) <= record.lastTappedSeason) dbhThen = m.dbhCm;
-  }
+  if (record.lastTappedSeason === null) return null;
+  const dbhThen = dbhBefore(record, record.lastTappedSeason);
+  if (dbhThen === null) return null;
   const table = tapsForDbh(dbhThen, profile);
   const wide = record.lastSeasonHoles.some((h) => h.bitCm >= WIDE_SPOUT_BIT_CM);
   return wide ? Math.min(table, 1) : table;

@@ -1,11 +1,13 @@
+import type { ReadingCheck } from './plausibility';
 import { sources } from './sources';
-import { cmToIn } from './units';
+import { cmToIn, in2ToCm2 } from './units';
 
 export const warningCodes = [
   'undersized',
   'overtapped',
   'too-close',
   'slow-growth',
+  'growth-limits-taps',
   'crown-dieback',
   'zone-depleted',
   'stale-measurement',
@@ -29,6 +31,23 @@ export function size(cm: number): string {
   return `${cm.toFixed(1)} cm (${cmToIn(cm).toFixed(1)} in)`;
 }
 
+/** "1.80 in² (11.6 cm²)". */
+function area(in2: number): string {
+  return `${in2.toFixed(2)} in² (${in2ToCm2(in2).toFixed(1)} cm²)`;
+}
+
+/** A bit as the guideline's unit sells it: "7/16 in" for an inch profile, "11 mm" for a metric one. */
+export function bitWords(cm: number, unit: 'in' | 'cm'): string {
+  if (unit === 'cm') return `${Number((cm * 10).toFixed(1))} mm`;
+  let num = Math.round(cmToIn(cm) * 64);
+  let den = 64;
+  while (num > 0 && num % 2 === 0 && den > 1) {
+    num /= 2;
+    den /= 2;
+  }
+  return den === 1 ? `${num} in` : `${num}/${den} in`;
+}
+
 function pct(share: number): string {
   return `${Math.round(share * 100)} %`;
 }
@@ -37,42 +56,53 @@ function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 ? '' : 's'}`;
 }
 
+const floorWords = (floor: number) =>
+  `the ${pct(floor)} floor (a calibrated value of Clearwood’s model)`;
+
 export const warn = {
   undersized: (dbhCm: number, minimumCm: number, source: string): AdvisorWarning => ({
     code: 'undersized',
     message: `At ${size(dbhCm)} this tree is below the ${size(minimumCm)} the guideline starts tapping at. Let it grow.`,
     source,
   }),
-  overtapped: (season: number, holes: number, allowed: number, source: string): AdvisorWarning => ({
+  overtapped: (
+    season: number,
+    holes: number,
+    allowed: number,
+    dbhThenCm: number,
+    source: string,
+  ): AdvisorWarning => ({
     code: 'overtapped',
-    message: `In ${season} this tree carried ${plural(holes, 'tap')}; at its size then the guideline allowed ${allowed}.`,
+    message: `In ${season} this tree carried ${plural(holes, 'tap')}; at the ${size(dbhThenCm)} measured before that season the guideline allowed ${allowed}.`,
     source,
   }),
   crowdedRecord: (season: number, source: string): AdvisorWarning => ({
     code: 'too-close',
-    message: `Holes drilled in ${season} sit closer than the spacing to each other or to older holes. Keep new holes further apart.`,
+    message: `Holes drilled in ${season} sit closer than the spacing to each other or to older holes, or in an older hole’s stain. Keep new holes further apart.`,
     source,
   }),
   noSpot: (placed: number, wanted: number, source: string): AdvisorWarning => ({
     code: 'too-close',
     message:
       placed === 0
-        ? 'There is no spot left in the height band clear of the holes still in reach. Rest the tree or widen the band.'
-        : `Only ${plural(placed, 'spot')} left clear of the holes still in reach, so set ${placed} instead of ${wanted}.`,
+        ? 'There is no spot left in the height band clear of the holes still in reach and their stain. Rest the tree this season.'
+        : `Only ${plural(placed, 'spot')} left clear of the holes still in reach and their stain, so set ${placed} instead of ${wanted}.`,
     source,
   }),
-  slowGrowth: (grewIn2: number, neededIn2: number, extrapolated: boolean): AdvisorWarning => ({
+  slowGrowth: (grewIn2: number, oneTapNeedsIn2: number): AdvisorWarning => ({
     code: 'slow-growth',
-    message:
-      `Basal area grew ${grewIn2.toFixed(2)} in² a year; a tree this size needs ${neededIn2.toFixed(2)} in² for tapping to keep up.` +
-      (extrapolated ? ' (The study covered 10–18 in trees; this figure extends its line.)' : '') +
-      ' Tap lightly and shallow.',
-    source: sources.minimumGrowth,
+    message: `Basal area grew ${area(grewIn2)} a year; even one tap on a tree this size needs ${area(oneTapNeedsIn2)} a year to lay clear wood over its stain. Set one shallow tap at most.`,
+    source: sources.ourModel,
   }),
-  rateTooFast: (taps: number, sustainable: number): AdvisorWarning => ({
-    code: 'slow-growth',
-    message: `At its measured growth this tree covers the stain of ${plural(sustainable, 'tap')} a year, not ${taps}.`,
-    source: sources.tappingZone,
+  growthLimitsTaps: (
+    wanted: number,
+    carried: number,
+    grewIn2: number,
+    neededIn2: number,
+  ): AdvisorWarning => ({
+    code: 'growth-limits-taps',
+    message: `Basal area grew ${area(grewIn2)} a year: enough for ${plural(carried, 'tap')}, while ${plural(wanted, 'tap')} would need ${area(neededIn2)}. Set ${carried}.`,
+    source: sources.ourModel,
   }),
   dieback: (
     pctValue: number,
@@ -91,32 +121,47 @@ export const warn = {
   }),
   depleted: (share: number, floor: number): AdvisorWarning => ({
     code: 'zone-depleted',
-    message: `Only ${pct(share)} of the tapping zone is clear wood, below the ${pct(floor)} floor. Rest the tree while growth covers old stain.`,
-    source: sources.tappingZone,
+    message: `Only ${pct(share)} of the tapping zone is clear wood, below ${floorWords(floor)}. Rest the tree while growth covers old stain.`,
+    source: sources.ourModel,
   }),
   nearlyDepleted: (fit: number, wanted: number, floor: number): AdvisorWarning => ({
     code: 'zone-depleted',
-    message: `${plural(wanted, 'new hole')} would take the clear share of the tapping zone below ${pct(floor)}; set ${fit}.`,
-    source: sources.tappingZone,
+    message: `${plural(wanted, 'new hole')} would take the clear wood of the tapping zone below ${floorWords(floor)}; set ${fit}.`,
+    source: sources.ourModel,
   }),
   stale: (measuredSeason: number): AdvisorWarning => ({
     code: 'stale-measurement',
-    message: `Last measured in ${measuredSeason}. Measure the DBH and crown again before you drill.`,
+    message: `DBH last measured in ${measuredSeason}. Measure the DBH and rate the crown again before you drill.`,
+  }),
+  staleCrown: (ratedSeason: number, diebackPct: number): AdvisorWarning => ({
+    code: 'stale-measurement',
+    message: `Crown last rated in ${ratedSeason} (${diebackPct} % dieback): too long ago to go by. Rate the crown again before you drill.`,
+    source: sources.crownRating,
   }),
   noMeasurement: (): AdvisorWarning => ({
     code: 'no-measurement',
-    message: 'No diameter on record. Measure the DBH before planning taps.',
+    message: 'No DBH on record. Measure the DBH before planning taps.',
   }),
-  wideSpout: (): AdvisorWarning => ({
+  wideHistory: (oldBitCm: number, newBitCm: number, unit: 'in' | 'cm'): AdvisorWarning => ({
     code: 'spout-7-16',
-    message:
-      'Your last holes were drilled for 7/16 in spouts. With those, set one tap at most; 5/16 in spouts allow the full count.',
+    message: `Earlier holes on this tree were drilled with a ${bitWords(oldBitCm, unit)} bit for 7/16 in spouts. Drill new holes with a ${bitWords(newBitCm, unit)} bit; the wide old holes still count against the tapping zone.`,
     source: sources.omafra,
   }),
-  spoutTooWide: (maxBitCm: number, source: string): AdvisorWarning => ({
+  wideBeyondLimit: (
+    oldBitCm: number,
+    maxBitCm: number,
+    newBitCm: number,
+    unit: 'in' | 'cm',
+    source: string,
+  ): AdvisorWarning => ({
     code: 'spout-7-16',
-    message: `Your last holes were drilled wider than the ${(maxBitCm * 10).toFixed(0)} mm this guideline allows. Use a 5/16 in bit.`,
+    message: `Earlier holes on this tree were drilled with a ${bitWords(oldBitCm, unit)} bit, wider than the ${bitWords(maxBitCm, unit)} this guideline allows. Drill new holes with a ${bitWords(newBitCm, unit)} bit.`,
     source,
+  }),
+  wideBit: (): AdvisorWarning => ({
+    code: 'spout-7-16',
+    message: 'This guideline drills for 7/16 in spouts: with those, set one tap at most.',
+    source: sources.omafra,
   }),
   growthUnknown: (assumedDbhCmPerDecade: number): AdvisorWarning => ({
     code: 'growth-unknown',
@@ -131,5 +176,13 @@ export const warn = {
   outlier: (measuredOn: string, dbhCm: number): AdvisorWarning => ({
     code: 'measurement-outlier',
     message: `The reading of ${measuredOn} (${size(dbhCm)}) is far off the others and is left out of the growth figure. Check it.`,
+  }),
+  unconfirmed: (
+    reading: { measuredOn: string; dbhCm: number },
+    check: ReadingCheck,
+  ): AdvisorWarning => ({
+    code: 'measurement-outlier',
+    message: `The reading of ${reading.measuredOn} (${size(reading.dbhCm)}) is ${Math.abs(check.changeCm).toFixed(1)} cm ${check.changeCm > 0 ? 'more' : 'less'} than the one of ${check.previous.measuredOn}${check.kind === 'shrink' ? ', a shrink beyond tape error' : ', more than a year’s growth'}. It is left out of the advice until it is confirmed: re-measure, or record it again as confirmed.`,
+    source: sources.plausibility,
   }),
 };

@@ -31,6 +31,11 @@ export const measurementInputSchema = z.object({
   note: z.string().trim().max(1000).nullable().optional(),
   /** When this row corrects an earlier one, that row's id. */
   correctsId: z.number().int().positive().nullable().optional(),
+  /**
+   * The forester confirms a DBH far off the tree's reading before it (more than about 2.5 cm in
+   * a year, or a shrink beyond tape error). Without it such a reading is refused.
+   */
+  confirmedOutlier: z.boolean().optional(),
 });
 export type MeasurementInput = z.infer<typeof measurementInputSchema>;
 
@@ -43,6 +48,8 @@ export interface Measurement {
   crownDiebackPct: number | null;
   note: string | null;
   correctsId: number | null;
+  /** The forester confirmed this DBH although it is far off the reading before it. */
+  confirmedOutlier: boolean;
   /** True when a later row corrects this one. */
   superseded: boolean;
   recordedBy: number | null;

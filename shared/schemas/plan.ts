@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { Advice, PlanTotals } from '../rules/index';
+import type { Advice, GuidelineRule, PlanTotals, ProfileSpacing } from '../rules/index';
 import { listQuerySchema } from './list-query';
 
 /**
@@ -31,8 +31,18 @@ export interface ProfileSummary {
   source: string;
   /** Height band tapholes go in, cm above ground. */
   heightBand: { minCm: number; maxCm: number };
-  /** Conductive share below which the tapping zone counts as depleted. */
+  /** Conductive share below which the tapping zone counts as depleted (a calibrated value). */
   floor: number;
+  /** The unit the guideline's table is written in: bits and sizes are worded in it. */
+  unit: 'in' | 'cm';
+  spacing: ProfileSpacing;
+  /** The stain column each hole leaves, as the tapping-zone model draws it. */
+  stainLengthCm: number;
+  stainMarginCm: number;
+  /** Rules for the season as a whole (Quebec: 1 January – 30 April, spouts out by 1 June). */
+  seasonRules: GuidelineRule[];
+  /** Something the owner must know about the stand's guideline (it was moved to the rule in force). */
+  notice: string | null;
 }
 
 export interface TreeAdvice extends Advice {
@@ -42,7 +52,7 @@ export interface TreeAdvice extends Advice {
   profile: ProfileSummary;
 }
 
-export interface PlanItem extends Omit<Advice, 'projection'> {
+export interface PlanItem extends Omit<Advice, 'projection' | 'holesInReach'> {
   treeId: number;
   tag: string;
 }

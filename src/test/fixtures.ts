@@ -48,6 +48,7 @@ export const measurement = (overrides: Partial<Measurement> = {}): Measurement =
   crownDiebackPct: 10,
   note: null,
   correctsId: null,
+  confirmedOutlier: false,
   superseded: false,
   recordedBy: 11,
   createdAt: '2025-04-01T12:00:00Z',

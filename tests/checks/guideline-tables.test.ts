@@ -61,17 +61,91 @@ describe('Ontario, buckets: OMAFRA guidance — P', () => {
   ])('%f in → %d taps', (dbhIn, taps) => expect(atIn(dbhIn, 'ontario-buckets')).toBe(taps));
 });
 
-describe('Quebec public land: Quebec regulation A-18.1 r.2 (2004) — P', () => {
+// Quebec private land: M-35.1 r.8.1 s.6 (in force 2023–), read 2026-12-01 in the version of
+// 2023-09-20: 0 to 23 cm none, 23.1 to 39 cm one, 39.1 cm and more two — P.
+describe('Quebec private land: Quebec, sugar-bush plan standard for private land, M-35.1 r.8.1 s.6 (in force 2023–) — P', () => {
   it.each([
-    [19.9, 0],
-    [20, 1],
-    [39.9, 1],
-    [40, 2],
-    [59.9, 2],
-    [60, 3],
-    [79.9, 3],
-    [80, 4],
-  ])('%f cm → %d taps', (dbhCm, taps) => expect(tapsForDbh(dbhCm, 'quebec-public')).toBe(taps));
+    [23.0, 0],
+    [23.1, 1],
+    [39.0, 1],
+    [39.1, 2],
+    [90, 2],
+  ])('%f cm → %d taps', (dbhCm, taps) => expect(tapsForDbh(dbhCm, 'quebec-private')).toBe(taps));
+
+  it('names the standard and the date it was read', () => {
+    expect(profiles['quebec-private'].source).toContain('M-35.1 r.8.1 s.6');
+    expect(profiles['quebec-private'].source).toContain('read 2026-12-01');
+  });
+});
+
+// Quebec public land: Regulation respecting forest management permits, A-18.1 r.8.1 s.24. The
+// text in force since 2023 was not found among the official pages read 2026-12-01, so its table
+// is from memory (matching the private-land table, as DOMAIN.md says); s.58, read 2026-12-01 in
+// the version of 2024-11-19, gives the rule until 2022-12-31 (19.1/39.1/59.1/79.1 cm) — P.
+describe('Quebec public land: Regulation respecting forest management permits, A-18.1 r.8.1 s.24 — P (table from memory)', () => {
+  it.each([
+    [23.0, 0],
+    [23.1, 1],
+    [39.0, 1],
+    [39.1, 2],
+    [85, 2],
+  ])('%f cm → %d taps (from memory)', (dbhCm, taps) =>
+    expect(tapsForDbh(dbhCm, 'quebec-public')).toBe(taps),
+  );
+
+  it('is no longer the repealed 2004 table (A-18.1 r.2: 20/40/60/80 cm, replaced 2018-08-16)', () => {
+    expect(tapsForDbh(20, 'quebec-public')).toBe(0);
+    expect(tapsForDbh(60, 'quebec-public')).toBe(2);
+    expect(tapsForDbh(80, 'quebec-public')).toBe(2);
+    for (const p of Object.values(profiles)) expect(p.source).not.toMatch(/A-18\.1 r\.2\b/);
+  });
+
+  it('cites the section, says the table is from memory and gives the date read', () => {
+    const source = profiles['quebec-public'].source;
+    expect(source).toContain('A-18.1 r.8.1 s.24');
+    expect(source).toContain('from memory');
+    expect(source).toContain('read 2026-12-01');
+  });
+});
+
+describe('the Quebec conditions (A-18.1 r.8.1 s.24 as s.58 reads it — P)', () => {
+  it.each(['quebec-private', 'quebec-public'] as const)(
+    '%s: tap 1 January – 30 April and pull spouts by 1 June, for the season',
+    (key) => {
+      const text = profiles[key].seasonRules.map((r) => r.text).join(' ');
+      expect(text).toContain('1 January and 30 April');
+      expect(text).toContain('1 June');
+      for (const r of profiles[key].seasonRules) expect(r.source).toContain('A-18.1 r.8.1');
+    },
+  );
+
+  it.each(['quebec-private', 'quebec-public'] as const)(
+    '%s: bit at most 11 mm, at most 6 cm deep with bark, holes spread evenly, with the drilling',
+    (key) => {
+      const p = profiles[key];
+      expect(p.limits).toEqual({ maxDepthCm: 6, maxBitCm: 1.1 });
+      const text = p.drillingRules.map((r) => r.text).join(' ');
+      expect(text).toContain('11 mm');
+      expect(text).toContain('6 cm deep');
+      expect(text).toContain('evenly');
+    },
+  );
+});
+
+describe('the built-in profiles', () => {
+  it('are the six guideline sets, each with its source', () => {
+    expect(Object.keys(profiles).sort()).toEqual(
+      [
+        'conservative',
+        'ontario-buckets',
+        'ontario-vacuum',
+        'quebec-private',
+        'quebec-public',
+        'traditional',
+      ].sort(),
+    );
+    for (const p of Object.values(profiles)) expect(p.source.length).toBeGreaterThan(10);
+  });
 });
 
 describe('minimum size', () => {
@@ -86,6 +160,7 @@ describe('minimum size', () => {
     expect(profiles.traditional.source).toContain('NAMSPM traditional set');
     expect(profiles['ontario-vacuum'].source).toContain('OMAFRA');
     expect(profiles['ontario-buckets'].source).toContain('OMAFRA');
-    expect(profiles['quebec-public'].source).toContain('A-18.1 r.2');
+    expect(profiles['quebec-public'].source).toContain('A-18.1 r.8.1');
+    expect(profiles['quebec-private'].source).toContain('M-35.1 r.8.1');
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { adviseTree } from '../../shared/rules/advise-tree';
-import { profiles } from '../../shared/rules/profiles';
+import { profileKeys, profiles } from '../../shared/rules/profiles';
+import { isClearOf, isInStainColumn } from '../../shared/rules/spacing';
 import { DEFAULT_BIT_CM, DEFAULT_DEPTH_CM } from '../../shared/rules/tapping-zone';
 import { azimuthGapDeg, inToCm } from '../../shared/rules/units';
 
@@ -55,11 +56,79 @@ describe('spacing from holes still in reach', () => {
     expect(profiles.conservative.spacing).toEqual({
       sidewaysCm: inToCm(4),
       verticalCm: inToCm(12),
+      rule: 'either',
     });
   });
 
-  it('the traditional set keeps 3 in over and 6 in up/down (Ohio State — S)', () => {
-    expect(profiles.traditional.spacing).toEqual({ sidewaysCm: inToCm(3), verticalCm: inToCm(6) });
+  it('the traditional set keeps 3 in over and 6 in up/down, both distances (Ohio State — S)', () => {
+    expect(profiles.traditional.spacing).toEqual({
+      sidewaysCm: inToCm(3),
+      verticalCm: inToCm(6),
+      rule: 'both',
+    });
+  });
+
+  it('where a source says "over and up", a hole 6 in straight above an old one is not clear (Ohio State — S)', () => {
+    const c = Math.PI * inToCm(20);
+    const old = { azimuthDeg: 180, heightCm: 100 };
+    const over = (inches: number) => 180 + (inToCm(inches) / c) * 360;
+    const { spacing } = profiles.traditional;
+    expect(isClearOf({ azimuthDeg: 180, heightCm: 100 + inToCm(6) }, old, spacing, c)).toBe(false);
+    expect(isClearOf({ azimuthDeg: over(3), heightCm: 100 }, old, spacing, c)).toBe(false);
+    expect(isClearOf({ azimuthDeg: over(3), heightCm: 100 + inToCm(6) }, old, spacing, c)).toBe(
+      true,
+    );
+    // The opposite side of the trunk at the same height is another part of the tree.
+    expect(isClearOf({ azimuthDeg: 0, heightCm: 100 }, old, spacing, c)).toBe(true);
+  });
+
+  it('where a source says "to the side or above/below", either distance is enough (UVM Proctor sap-yield tips 2020 — S)', () => {
+    const c = Math.PI * inToCm(20);
+    const old = { azimuthDeg: 180, heightCm: 100 };
+    const { spacing } = profiles.conservative;
+    expect(isClearOf({ azimuthDeg: 180, heightCm: 100 + inToCm(12) }, old, spacing, c)).toBe(true);
+    const fourIn = (inToCm(4) / c) * 360;
+    expect(isClearOf({ azimuthDeg: 180 + fourIn, heightCm: 100 }, old, spacing, c)).toBe(true);
+  });
+
+  it('whatever the profile, the advice never puts a hole 6 in straight above last season’s (zone model — our assumption)', () => {
+    for (const key of profileKeys) {
+      const advice = adviseTree(
+        {
+          measurements: [
+            { measuredOn: '2024-06-01', dbhCm: 48, crownDiebackPct: 0 },
+            { measuredOn: '2026-06-01', dbhCm: 50, crownDiebackPct: 0 },
+          ],
+          tapholes: [
+            {
+              season: 2026,
+              heightCm: 90,
+              azimuthDeg: 180,
+              depthCm: 5,
+              bitCm: 0.79375,
+              collection: 'vacuum',
+            },
+          ],
+        },
+        { season: 2027, profile: key },
+      );
+      const column = {
+        stainLengthCm: profiles[key].zone.stainLengthCm,
+        stainMarginCm: profiles[key].zone.stainMarginCm,
+      };
+      for (const p of advice.placements) {
+        expect(
+          isInStainColumn(
+            p,
+            { azimuthDeg: 180, heightCm: 90, bitCm: 0.79375 },
+            advice.bitCm,
+            column,
+            Math.PI * 50,
+          ),
+        ).toBe(false);
+        expect(p.azimuthDeg === 180 && p.heightCm === 90 + inToCm(6)).toBe(false);
+      }
+    }
   });
 
   it('every spacing lies within 1–4 in sideways and 6–12 in vertically (UVM Proctor — S; Cornell, Wild — S; Ohio State — S)', () => {
@@ -98,6 +167,13 @@ describe('where the holes go', () => {
 
   it('several holes are spread evenly around the trunk (Quebec — P)', () => {
     const advice = adviseTree(healthy(85), { season: 2027, profile: 'quebec-public' });
+    expect(advice.taps).toBe(2);
+    const az = advice.placements.map((p) => p.azimuthDeg).sort((x, y) => x - y);
+    az.forEach((x, i) => expect(azimuthGapDeg(x, az[(i + 1) % az.length])).toBeCloseTo(180, 5));
+  });
+
+  it('four holes of the traditional set go a quarter turn apart (Quebec — P, holes spread evenly)', () => {
+    const advice = adviseTree(healthy(inToCm(26)), { season: 2027, profile: 'traditional' });
     expect(advice.taps).toBe(4);
     const az = advice.placements.map((p) => p.azimuthDeg).sort((x, y) => x - y);
     az.forEach((x, i) => expect(azimuthGapDeg(x, az[(i + 1) % az.length])).toBeCloseTo(90, 5));

@@ -47,13 +47,57 @@ describe('crown dieback', () => {
   });
 });
 
+describe('crown ratings', () => {
+  it('a rating more than three seasons old is flagged like an old DBH and not gone by (USFS Crown Condition Rating Guide, Millers et al. 1992 — P; common practice)', () => {
+    const t = {
+      measurements: [
+        { measuredOn: '2022-06-01', dbhCm: inToCm(20) - 2.4, crownDiebackPct: 40 },
+        { measuredOn: '2024-06-01', dbhCm: inToCm(20) - 0.8 },
+        { measuredOn: '2026-06-01', dbhCm: inToCm(20) },
+      ],
+      tapholes: [],
+    };
+    const advice = adviseTree(t, { season: 2027, profile: 'conservative' });
+    const stale = advice.warnings.find((w) => w.code === 'stale-measurement');
+    expect(stale?.message).toContain('Crown last rated in 2022');
+    expect(advice.warnings.map((w) => w.code)).not.toContain('crown-dieback');
+    // The same rating three seasons before is still recent, and counts (OMAFRA — P).
+    const recent = adviseTree(t, { season: 2025, profile: 'conservative' });
+    expect(recent.warnings.map((w) => w.code)).toContain('crown-dieback');
+    expect(recent.taps).toBe(1);
+  });
+});
+
 describe('spouts', () => {
-  it('with 7/16 in spouts, at most 1 tap per tree (OMAFRA — P)', () => {
+  it('a tree with 7/16 in holes in its history gets a 5/16 in bit for new holes, with the note (OMAFRA — P)', () => {
     const advice = adviseTree(tree(24, 0, inToCm(7 / 16)), {
       season: 2027,
       profile: 'conservative',
     });
-    expect(advice.taps).toBe(1);
-    expect(advice.warnings.map((w) => w.code)).toContain('spout-7-16');
+    expect(advice.bitCm).toBeCloseTo(inToCm(5 / 16), 10);
+    const note = advice.warnings.find((w) => w.code === 'spout-7-16');
+    expect(note?.message).toContain('7/16 in');
+    expect(note?.message).toContain('5/16 in');
+    expect(note?.message).not.toContain('mm');
+    expect(note?.source).toBe('OMAFRA guidance');
+  });
+
+  it('its tap count then comes from the zone model, not the one-tap rule for 7/16 in spouts (OMAFRA — P)', () => {
+    const advice = adviseTree(tree(24, 0, inToCm(7 / 16)), {
+      season: 2027,
+      profile: 'conservative',
+    });
+    expect(advice.taps).toBe(2);
+    expect(advice.taps).toBeLessThanOrEqual(advice.maxSustainableTaps);
+  });
+
+  it('a metric guideline names the bit it forbids in millimetres (Quebec — P)', () => {
+    const advice = adviseTree(tree(24, 0, inToCm(7 / 16)), {
+      season: 2027,
+      profile: 'quebec-private',
+    });
+    const note = advice.warnings.find((w) => w.code === 'spout-7-16');
+    expect(note?.message).toContain('11 mm');
+    expect(advice.bitCm).toBeLessThanOrEqual(1.1);
   });
 });

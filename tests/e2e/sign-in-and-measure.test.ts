@@ -55,7 +55,7 @@ describe('in a real browser', () => {
     await context.close();
   });
 
-  it('a forester records a measurement and sees it in the diameter history', async () => {
+  it('a forester records a reading far off the last one, confirms it, and sees it in the diameter history', async () => {
     const tree = await firstActiveTreeId();
     const context = await browser.newContext();
     const page = await context.newPage();
@@ -66,6 +66,13 @@ describe('in a real browser', () => {
     await page.getByLabel('Date').fill('2026-11-20');
     await page.getByLabel('Unit', { exact: true }).selectOption('cm');
     await page.getByRole('textbox', { name: 'Diameter', exact: true }).fill('77.7');
+    // Far more than a year's growth: the form asks to re-measure or confirm before it saves.
+    const confirm = page.getByRole('group', { name: 'Confirm the reading' });
+    await confirm.waitFor();
+    expect(await confirm.textContent()).toMatch(/cm more than (earlier this season|last season|in \d{4}) — re-measure or confirm/);
+    await page.getByRole('button', { name: 'Save measurement' }).click();
+    await page.getByText('Confirm it, or correct the value.').waitFor();
+    await confirm.getByRole('checkbox').check();
     await page.getByRole('button', { name: 'Save measurement' }).click();
     const history = page.getByRole('table', { name: 'Diameter history' });
     await expect
@@ -77,6 +84,7 @@ describe('in a real browser', () => {
       .where({ tree_id: tree.id, measured_on: '2026-11-20' })
       .first();
     expect(saved.dbh_cm).toBeCloseTo(77.7, 5);
+    expect(Boolean(saved.confirmed_outlier)).toBe(true);
     await context.close();
   });
 

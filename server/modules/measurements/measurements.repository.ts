@@ -10,6 +10,7 @@ const toMeasurement = (r: Record<string, unknown>): Measurement => ({
   crownDiebackPct: (r.crown_dieback_pct as number | null) ?? null,
   note: (r.note as string | null) ?? null,
   correctsId: (r.corrects_id as number | null) ?? null,
+  confirmedOutlier: Boolean(r.confirmed_outlier),
   superseded: Number(r.superseded) > 0,
   recordedBy: (r.recorded_by as number | null) ?? null,
   createdAt: r.created_at as string,
@@ -38,7 +39,31 @@ export function measurementsRepository(db: Knex) {
       const row = await withSuperseded().where('m.id', id).first();
       return row ? toMeasurement(row) : undefined;
     },
-    async create(treeId: number, userId: number, m: MeasurementInput): Promise<number> {
+    /** The tree's standing readings (no later row corrects them), leaving out one being corrected. */
+    async standing(treeId: number, except?: number | null) {
+      const rows: { measured_on: string; dbh_cm: number; confirmed_outlier: number }[] = await db(
+        'measurements as m',
+      )
+        .where('m.tree_id', treeId)
+        .whereNotExists(
+          db('measurements as c').select(db.raw('1')).whereRaw('c.corrects_id = m.id'),
+        )
+        .modify((q) => {
+          if (except) q.whereNot('m.id', except);
+        })
+        .orderBy(['m.measured_on', 'm.id'])
+        .select('m.measured_on', 'm.dbh_cm', 'm.confirmed_outlier');
+      return rows.map((r) => ({
+        measuredOn: r.measured_on,
+        dbhCm: r.dbh_cm,
+        confirmedOutlier: Boolean(r.confirmed_outlier),
+      }));
+    },
+    async create(
+      treeId: number,
+      userId: number,
+      m: MeasurementInput & { confirmedOutlier: boolean },
+    ): Promise<number> {
       const [row] = await db('measurements')
         .insert({
           tree_id: treeId,
@@ -48,6 +73,7 @@ export function measurementsRepository(db: Knex) {
           crown_dieback_pct: m.crownDiebackPct ?? null,
           note: m.note ?? null,
           corrects_id: m.correctsId ?? null,
+          confirmed_outlier: m.confirmedOutlier,
           recorded_by: userId,
         })
         .returning('id');

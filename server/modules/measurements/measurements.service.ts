@@ -4,6 +4,7 @@ import { auditRepository } from '../audit/audit.repository';
 import type { ListQuery, Page } from '../../../shared/schemas/list-query';
 import type { Measurement, MeasurementInput } from '../../../shared/schemas/measurement';
 import { measurementsRepository } from './measurements.repository';
+import { checkNewReading, readingQuestion, seasonOf } from '../../../shared/rules/index';
 import { pageOf } from '../../lib/paging';
 
 export function measurementsService(ctx: AppContext) {
@@ -39,7 +40,16 @@ export function measurementsService(ctx: AppContext) {
           );
         }
       }
-      const id = await repo.create(treeId, userId, input);
+      // A reading far off the tree's one before it must be confirmed (it is an entry error until then).
+      const check = checkNewReading(await repo.standing(treeId, input.correctsId), input);
+      if (check && input.confirmedOutlier !== true) {
+        const question = readingQuestion(check, seasonOf(input.measuredOn));
+        const sentence = question[0].toUpperCase() + question.slice(1);
+        throw new AppError(400, 'unconfirmed-outlier', `${sentence}.`, {
+          confirmedOutlier: sentence,
+        });
+      }
+      const id = await repo.create(treeId, userId, { ...input, confirmedOutlier: check !== null });
       await audit.record({
         sugarbushId,
         userId,

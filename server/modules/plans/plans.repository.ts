@@ -30,7 +30,7 @@ export async function loadStandTrees(
   const measurements = await scope('measurements', 'm')
     .whereNotExists(db('measurements as c').select(db.raw('1')).whereRaw('c.corrects_id = m.id'))
     .orderBy(['m.tree_id', 'm.measured_on', 'm.id'])
-    .select('m.tree_id', 'm.measured_on', 'm.dbh_cm', 'm.crown_dieback_pct');
+    .select('m.tree_id', 'm.measured_on', 'm.dbh_cm', 'm.crown_dieback_pct', 'm.confirmed_outlier');
   const holes = await scope('tapholes', 'h')
     .orderBy(['h.tree_id', 'h.season', 'h.id'])
     .select(
@@ -66,6 +66,7 @@ export async function loadStandTrees(
       measuredOn: m.measured_on,
       dbhCm: m.dbh_cm,
       crownDiebackPct: m.crown_dieback_pct,
+      ...(m.confirmed_outlier ? { confirmedOutlier: true } : {}),
     });
   }
   for (const h of holes) {

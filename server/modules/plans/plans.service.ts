@@ -24,12 +24,18 @@ import { profileColumns } from '../sugarbushes/profile-choice';
 import { diffPlans } from './plan-diff';
 import { loadStandTrees } from './plans.repository';
 
-const summary = (p: GuidelineProfile): ProfileSummary => ({
+const summary = (p: GuidelineProfile, notice: string | null): ProfileSummary => ({
   key: p.key,
   label: p.label,
   source: p.source,
   heightBand: { minCm: p.heightBand.minCm, maxCm: p.heightBand.maxCm },
   floor: p.zone.floor,
+  unit: p.unit,
+  spacing: p.spacing,
+  stainLengthCm: p.zone.stainLengthCm,
+  stainMarginCm: p.zone.stainMarginCm,
+  seasonRules: p.seasonRules,
+  notice,
 });
 
 /** Trees the advisor does not tap have no meaningful share: they sort after every tapped one. */
@@ -48,9 +54,14 @@ export function plansService(ctx: AppContext) {
     const row = await ctx
       .db('sugarbushes')
       .where({ id: sugarbushId })
-      .first('profile', 'custom_profile', 'sunny_azimuth_deg');
+      .first('profile', 'custom_profile', 'sunny_azimuth_deg', 'profile_notice');
     if (!row) throw new AppError(404, 'not-found', 'Sugarbush not found');
-    return row as { profile: string; custom_profile: string | null; sunny_azimuth_deg: number };
+    return row as {
+      profile: string;
+      custom_profile: string | null;
+      sunny_azimuth_deg: number;
+      profile_notice: string | null;
+    };
   }
 
   async function standSettings(sugarbushId: number) {
@@ -58,6 +69,7 @@ export function plansService(ctx: AppContext) {
     return {
       profile: profileOf(row.profile, row.custom_profile),
       sunnyAzimuthDeg: row.sunny_azimuth_deg,
+      notice: row.profile_notice ?? null,
     };
   }
 
@@ -65,9 +77,9 @@ export function plansService(ctx: AppContext) {
   function wholePlan(sugarbushId: number, season: number) {
     const key = `plan:${sugarbushId}:${season}:${standVersion(ctx.db, sugarbushId)}`;
     return shared(ctx.db, key, async () => {
-      const { profile, sunnyAzimuthDeg } = await standSettings(sugarbushId);
+      const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
       const trees = await loadStandTrees(ctx.db, sugarbushId);
-      return { profile, plan: planStand(trees, { season, profile, sunnyAzimuthDeg }) };
+      return { profile, notice, plan: planStand(trees, { season, profile, sunnyAzimuthDeg }) };
     });
   }
 
@@ -77,11 +89,17 @@ export function plansService(ctx: AppContext) {
       treeId: number,
       season = upcomingSeason(),
     ): Promise<TreeAdvice> {
-      const { profile, sunnyAzimuthDeg } = await standSettings(sugarbushId);
+      const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
       const [tree] = await loadStandTrees(ctx.db, sugarbushId, treeId);
       if (!tree) throw new AppError(404, 'not-found', 'Tree not found');
       const advice = adviseTree(tree, { season, profile, sunnyAzimuthDeg, withProjection: true });
-      return { ...advice, treeId: tree.id, tag: tree.tag, season, profile: summary(profile) };
+      return {
+        ...advice,
+        treeId: tree.id,
+        tag: tree.tag,
+        season,
+        profile: summary(profile, notice),
+      };
     },
 
     /** The season's plan under another guideline, against today's, before the owner saves it. */
@@ -112,7 +130,7 @@ export function plansService(ctx: AppContext) {
 
     async planForStand(sugarbushId: number, q: PlanQuery): Promise<StandPlanResponse> {
       const season = q.season ?? upcomingSeason();
-      const { profile, plan } = await wholePlan(sugarbushId, season);
+      const { profile, notice, plan } = await wholePlan(sugarbushId, season);
       let items = plan.items as PlanItem[];
       if (q.q) items = items.filter((i) => i.tag.toLowerCase().includes(q.q!.toLowerCase()));
       if (q.verdict) items = items.filter((i) => i.verdict === q.verdict);
@@ -130,7 +148,7 @@ export function plansService(ctx: AppContext) {
       const start = (q.page - 1) * q.pageSize;
       return {
         season,
-        profile: summary(profile),
+        profile: summary(profile, notice),
         totals: plan.totals,
         items: items.slice(start, start + q.pageSize),
         total: items.length,

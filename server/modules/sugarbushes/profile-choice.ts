@@ -18,7 +18,8 @@ export function profileColumns(
       );
       throw new AppError(400, 'invalid-input', 'The custom profile needs attention', fields);
     }
-    row.custom_profile = JSON.stringify(patch.customProfile);
+    // The checked set, never the body as sent.
+    row.custom_profile = JSON.stringify(result.value);
   }
   const profile = patch.profile;
   if (profile !== undefined) {
@@ -34,6 +35,8 @@ export function profileColumns(
       });
     }
     row.profile = profile;
+    // Choosing a guideline dismisses the notice that the stand's old rule was replaced.
+    row.profile_notice = null;
   }
   return row;
 }

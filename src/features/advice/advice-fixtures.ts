@@ -9,6 +9,12 @@ const profile = {
   source: 'NAMSPM 2nd ed. 2006, as summarised by UVM Proctor',
   heightBand: { minCm: 60, maxCm: 150 },
   floor: 0.82,
+  unit: 'in' as const,
+  spacing: { sidewaysCm: 10.16, verticalCm: 30.48, rule: 'either' as const },
+  stainLengthCm: 30,
+  stainMarginCm: 1,
+  seasonRules: [],
+  notice: null,
 };
 
 export const planItem = (overrides: Partial<PlanItem> = {}): PlanItem => ({
@@ -27,16 +33,26 @@ export const planItem = (overrides: Partial<PlanItem> = {}): PlanItem => ({
   reasons: [],
   profileKey: 'conservative',
   tableTaps: 2,
+  guidelineTaps: 2,
   dbhCm: 47,
   collection: 'vacuum',
   growth: null,
   radialGrowthCmPerYear: 0.25,
   growthAssumed: false,
   basalAreaGrowthIn2: 7.05,
-  minimumGrowthIn2: 3.32,
+  minimumGrowthIn2: 2.6,
+  minimumGrowthTaps: 2,
   shareAfter: 0.93,
   steadyStateShare: 0.92,
   maxSustainableTaps: 6,
+  stainReachSeasons: 18,
+  drillingNotes: [
+    {
+      text: 'Do not drill a frozen trunk: wait until it is no colder than about −5 °C.',
+      source: 'OMAFRA guidance',
+    },
+  ],
+  frozen: null,
   ...overrides,
 });
 
@@ -50,6 +66,7 @@ export const treeAdvice = (overrides: Partial<TreeAdvice> = {}): TreeAdvice => (
     shareBefore: 0.94 - i * 0.001,
     shareAfter: 0.93 - i * 0.001,
   })),
+  holesInReach: [],
   ...overrides,
 });
 

@@ -16,11 +16,13 @@ function openAdvice(
 ) {
   const api = mockApi({
     'GET /api/auth/me': meAs('tapper', unitSystem),
-    [ADVICE]: treeAdvice(),
-    'GET /api/trees/7/tapholes': page([
-      taphole({ id: 1, season: 2026, azimuthDeg: 225, heightCm: 70 }),
-      taphole({ id: 2, season: 2026, azimuthDeg: 60, heightCm: 120 }),
-    ]),
+    [ADVICE]: treeAdvice({
+      holesInReach: [
+        { ...taphole({ season: 2026, azimuthDeg: 225, heightCm: 70 }) },
+        { ...taphole({ season: 2026, azimuthDeg: 60, heightCm: 120 }) },
+      ],
+    }),
+    'GET /api/trees/7/tapholes': page([]),
     ...routes,
   });
   const view = renderPage({ path: '/trees/:treeId', url, element: <AdviceCard treeId={7} /> });
@@ -94,7 +96,13 @@ describe('the advice card', () => {
       await screen.findByText('94 % now → 93 % after drilling → 92 % in the long run at this rate'),
     ).toBeInTheDocument();
     expect(await screen.findByText('7.05 in²/yr measured')).toBeInTheDocument();
-    expect(screen.getByText(/tapping needs at least 3.32 in²\/yr/)).toBeInTheDocument();
+    expect(
+      screen.getByText(/2 taps a year at this bit and depth need at least 2.60 in²\/yr/),
+    ).toBeInTheDocument();
+    // The 2016 study's healthy trees are context, not the test.
+    expect(
+      screen.getByText(/healthy trees in the 2016 study grew about 1.8 in²\/yr at 10 in/),
+    ).toBeInTheDocument();
     expect(
       screen.getByRole('img', { name: /Clear wood tapped twice a year: 94 % in 2027/ }),
     ).toBeInTheDocument();
@@ -111,6 +119,58 @@ describe('the advice card', () => {
     expect(diagram).toHaveAccessibleName(
       expect.stringContaining('New holes: 1, south at 1.10 m; 2, north at 0.80 m.'),
     );
+  });
+
+  it('beside the projection, gives the long-run share and says when old stain stays in reach for decades', async () => {
+    openAdvice('metric', {
+      [ADVICE]: treeAdvice({ steadyStateShare: 0.86, stainReachSeasons: 45 }),
+    });
+    const longRun = await screen.findByText('In the long run at this rate');
+    const figures = longRun.closest('dl')!;
+    expect(within(figures).getByText('86 % clear wood')).toBeInTheDocument();
+    expect(within(figures).getByText('About 45 years')).toBeInTheDocument();
+    expect(
+      within(figures).getByText(/stays within reach of new holes for decades/),
+    ).toBeInTheDocument();
+  });
+
+  it('with the drilling, says not to drill a frozen trunk, and when the log knows it is frozen, to wait', async () => {
+    openAdvice('metric');
+    const notes = await screen.findByRole('list', { name: 'With the drilling' });
+    expect(within(notes).getByText(/no colder than about −5 °C/)).toBeInTheDocument();
+    expect(screen.queryByText('Wait to drill: the trunk is frozen.')).toBeNull();
+  });
+
+  it('when the log knows the trunk is frozen, then it says to wait', async () => {
+    openAdvice('metric', { [ADVICE]: treeAdvice({ frozen: true }) });
+    expect(await screen.findByText('Wait to drill: the trunk is frozen.')).toBeInTheDocument();
+  });
+
+  it('labels a growth that carries fewer taps apart from slow growth', async () => {
+    openAdvice('metric', {
+      [ADVICE]: treeAdvice({
+        warnings: [
+          {
+            code: 'growth-limits-taps',
+            message: 'Basal area grew 1.80 in² a year: enough for 1 tap.',
+            source: 'Clearwood tapping-zone model',
+          },
+        ],
+      }),
+    });
+    const warnings = await screen.findByRole('region', { name: 'Warnings' });
+    expect(within(warnings).getByText('Growth carries fewer taps.')).toBeInTheDocument();
+    expect(within(warnings).queryByText('Slow growth.')).toBeNull();
+  });
+
+  it('when the stand was moved to the rule in force, then the notice shows with the advice', async () => {
+    openAdvice('metric', {
+      [ADVICE]: treeAdvice({
+        profile: { ...treeAdvice().profile, notice: 'This stand followed a repealed table.' },
+      }),
+    });
+    const notice = await screen.findByRole('complementary', { name: 'Guideline changed' });
+    expect(within(notice).getByText('This stand followed a repealed table.')).toBeInTheDocument();
   });
 
   it('when the user steps to the next season, then that season is asked for and kept in the URL', async () => {

@@ -15,14 +15,15 @@ export const warningLabels: Record<WarningCode, WarningLabel> = {
   overtapped: { label: 'Tapped too hard', weight: 'caution' },
   'too-close': { label: 'Holes too close', weight: 'caution' },
   'slow-growth': { label: 'Slow growth', weight: 'caution' },
+  'growth-limits-taps': { label: 'Growth carries fewer taps', weight: 'caution' },
   'crown-dieback': { label: 'Crown dieback', weight: 'caution' },
   'zone-depleted': { label: 'Little clear wood left', weight: 'caution' },
-  'stale-measurement': { label: 'Measured long ago', weight: 'note' },
+  'stale-measurement': { label: 'Measured or rated long ago', weight: 'note' },
   'no-measurement': { label: 'No DBH yet', weight: 'note' },
-  'spout-7-16': { label: 'Wide spout', weight: 'caution' },
+  'spout-7-16': { label: 'Old 7/16 in holes', weight: 'note' },
   'growth-unknown': { label: 'Growth not known yet', weight: 'note' },
   'growth-suspect': { label: 'DBH looks wrong', weight: 'caution' },
-  'measurement-outlier': { label: 'Odd reading left out', weight: 'note' },
+  'measurement-outlier': { label: 'Reading left out', weight: 'note' },
 };
 
 /** The mark beside a warning's words, so its weight never rests on colour alone. */

@@ -42,22 +42,22 @@ describe('recording a measurement on the tree page', () => {
     await screen.findByRole('heading', { name: 'Record measurement' });
 
     await user.click(screen.getByRole('radio', { name: 'Circumference' }));
-    await user.type(screen.getByRole('textbox', { name: 'Circumference' }), '100');
+    await user.type(screen.getByRole('textbox', { name: 'Circumference' }), '120');
     await user.selectOptions(screen.getByLabelText('Unit'), 'cm');
     await user.click(save());
 
     await waitFor(() => expect(api.to(POST)).toHaveLength(1));
     const body = api.to(POST)[0].body as { dbhCm: number };
-    expect(body.dbhCm).toBeCloseTo(100 / Math.PI, 2);
-    expect(body.dbhCm).toBeCloseTo(31.83, 2);
+    expect(body.dbhCm).toBeCloseTo(120 / Math.PI, 2);
+    expect(body.dbhCm).toBeCloseTo(38.2, 2);
   });
 
-  it('when a forester enters a diameter in inches, then it is saved in centimetres (12 in → 30.48 cm)', async () => {
+  it('when a forester enters a diameter in inches, then it is saved in centimetres (15 in → 38.1 cm)', async () => {
     const { api, user } = openTreeAs('forester');
     await screen.findByRole('heading', { name: 'Record measurement' });
 
     await user.selectOptions(screen.getByLabelText('Unit'), 'in');
-    await user.type(diameterField(), '12');
+    await user.type(diameterField(), '15');
     await user.selectOptions(screen.getByLabelText('Crown dieback'), '15');
     await user.type(screen.getByLabelText('Note'), 'Measured after the thaw');
     await user.click(save());
@@ -65,7 +65,7 @@ describe('recording a measurement on the tree page', () => {
     await waitFor(() => expect(api.to(POST)).toHaveLength(1));
     const request = api.to(POST)[0];
     expect(request.body).toMatchObject({
-      dbhCm: 30.48,
+      dbhCm: 38.1,
       crownDiebackPct: 15,
       note: 'Measured after the thaw',
       measuredOn: expect.stringMatching(/^\d{4}-\d{2}-\d{2}$/),
@@ -133,6 +133,52 @@ describe('recording a measurement on the tree page', () => {
     expect(await screen.findByText(/Saved: DBH 38\.4 cm/)).toBeInTheDocument();
     await waitFor(() => expect(api.to('GET /api/trees/7/measurements')).toHaveLength(2));
     expect(diameterField()).toHaveValue('');
+  });
+
+  // A DBH change of more than about 1 in (2.5 cm) a year, or a shrink beyond tape error, is an
+  // entry error until confirmed — common practice.
+  it('when a forester enters a reading far off the last one, then the form asks to confirm it before saving', async () => {
+    const { api, user } = openTreeAs('forester');
+    await screen.findByRole('heading', { name: 'Record measurement' });
+    await waitFor(() => expect(api.to('GET /api/trees/7/measurements')).toHaveLength(1));
+
+    await user.selectOptions(screen.getByLabelText('Unit'), 'cm');
+    await user.clear(screen.getByLabelText('Date'));
+    await user.type(screen.getByLabelText('Date'), '2026-04-02');
+    await user.type(diameterField(), '42.1');
+    const confirm = await screen.findByRole('group', { name: 'Confirm the reading' });
+    expect(
+      within(confirm).getByText('4.5 cm more than last season — re-measure or confirm'),
+    ).toBeInTheDocument();
+    await user.click(save());
+    expect(await screen.findByText('Confirm it, or correct the value.')).toBeInTheDocument();
+    expect(api.to(POST)).toHaveLength(0);
+
+    await user.click(within(confirm).getByRole('checkbox', { name: /this reading is right/ }));
+    await user.click(save());
+    await waitFor(() => expect(api.to(POST)).toHaveLength(1));
+    expect(api.to(POST)[0].body).toMatchObject({ dbhCm: 42.1, confirmedOutlier: true });
+  });
+
+  it('when the API asks for a confirmation the form did not know of, then the question shows with the box to tick', async () => {
+    const { user } = openTreeAs('forester', {
+      [POST]: json(400, {
+        error: {
+          code: 'unconfirmed-outlier',
+          message: '3.0 cm more than last season — re-measure or confirm.',
+          fields: { confirmedOutlier: '3.0 cm more than last season — re-measure or confirm' },
+        },
+      }),
+    });
+    await screen.findByRole('heading', { name: 'Record measurement' });
+    await user.selectOptions(screen.getByLabelText('Unit'), 'cm');
+    await user.type(diameterField(), '38');
+    await user.click(save());
+    const confirm = await screen.findByRole('group', { name: 'Confirm the reading' });
+    expect(
+      within(confirm).getByText('3.0 cm more than last season — re-measure or confirm'),
+    ).toBeInTheDocument();
+    expect(within(confirm).getByRole('checkbox')).toBeInTheDocument();
   });
 
   it.each<Role>(['tapper', 'consultant'])(

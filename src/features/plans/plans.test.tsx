@@ -68,6 +68,30 @@ describe('the season plan', () => {
     expect(screen.getByText('1–50 of 1,187')).toBeInTheDocument();
   });
 
+  // Quebec: tap once a year between 1 January and 30 April; spouts out by 1 June
+  // (A-18.1 r.8.1 s.24 — P).
+  it('under a guideline with rules for the season, shows them with the plan and the notice of a changed rule', async () => {
+    const quebec = {
+      ...standPlan(items).profile,
+      key: 'quebec-public',
+      seasonRules: [
+        {
+          text: 'Tap once a year, only between 1 January and 30 April.',
+          source: 'A-18.1 r.8.1 s.24',
+        },
+        { text: 'Pull every spout by 1 June at the latest.', source: 'A-18.1 r.8.1 s.24' },
+      ],
+      notice: 'This stand followed Quebec’s 2004 public-land table, replaced on 2018-08-16.',
+    };
+    openPlan({ [PLAN]: json(200, standPlan(items, { profile: quebec })) });
+    const rules = await screen.findByRole('list', { name: 'Rules for the season' });
+    expect(within(rules).getByText(/1 January and 30 April/)).toBeInTheDocument();
+    expect(within(rules).getByText(/by 1 June/)).toBeInTheDocument();
+    expect(screen.getByRole('complementary', { name: 'Guideline changed' })).toHaveTextContent(
+      'replaced on 2018-08-16',
+    );
+  });
+
   it('shows the whole stand in figures in the totals', async () => {
     openPlan();
     const totals = await screen.findByRole('region', { name: 'Plan totals' });

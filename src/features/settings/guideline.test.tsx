@@ -217,8 +217,8 @@ describe("the stand's own guideline", () => {
 
     expect(await screen.findByText('Enter a number')).toBeInTheDocument();
     expect(vertical).toHaveAccessibleDescription('Enter a number');
-    // The schema allows at most 400 cm: 157.48 in.
-    expect(highest).toHaveAccessibleDescription('Use 157.48 in or less');
+    // The schema allows at most 200 cm (tapholes go about 30–200 cm above ground): 78.74 in.
+    expect(highest).toHaveAccessibleDescription('Use 78.74 in or less');
     expect(vertical).toHaveValue('a foot');
     expect(api.to(PREVIEW)).toHaveLength(0);
   });

@@ -217,7 +217,9 @@ describe('recording a taphole on the tree page', () => {
       'The 2026 hole (south at 1.10 m) is 10 cm above this spot, in line with it.',
     );
     // Conservative spacing: 4 in (10 cm) round the trunk or 12 in (30 cm) up or down.
-    expect(box).toHaveTextContent('at least 10 cm round the trunk or 30 cm up or down');
+    expect(box).toHaveTextContent(
+      'at least 10 cm round the trunk or 30 cm up or down from holes still in reach, and out of their stain',
+    );
     expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
 
     await user.clear(screen.getByLabelText('Height'));
@@ -228,6 +230,25 @@ describe('recording a taphole on the tree page', () => {
     await user.type(screen.getByLabelText('Height'), '100');
     await user.click(save());
     await waitFor(() => expect(api.to(POST)).toHaveLength(1));
+  });
+
+  // The traditional set: 3 in over and 6 in up or down, both distances (Ohio State — S).
+  it('under a guideline that steps "over and up", a spot 6 in straight above last season’s hole is too close', async () => {
+    const profile = { ...treeAdvice().profile, key: 'traditional' };
+    const { api, user } = openTreeAs('tapper', 'metric', {
+      [TAPHOLES]: page([taphole({ id: 1, season: 2026, azimuthDeg: 180, heightCm: 90 })]),
+      [ADVICE]: treeAdvice({ profile }),
+    });
+    await openForm();
+    await waitFor(() => expect(api.to(TAPHOLES).length).toBeGreaterThan(0));
+
+    await user.type(screen.getByLabelText('Height'), '105.2');
+    await user.selectOptions(screen.getByLabelText('Side'), 'S');
+
+    const warning = await screen.findByText('Close to an earlier hole');
+    expect(warning.parentElement!).toHaveTextContent(
+      'at least 8 cm round the trunk and 15 cm up or down',
+    );
   });
 
   it('shows the drilling caution beside the form, once', async () => {

@@ -5,13 +5,13 @@ import type { TreeAdvice } from '@shared/schemas/plan';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
-import { useTapholes } from '@/features/tapholes/api/get-tapholes';
 import { useUnitSystem } from '@/lib/units';
 import { useTreeAdvice } from '../api/get-tree-advice';
 import { adviceSentence, drillWords, spotWords } from '../advice-words';
 import { parseSeason, seasonParam } from '../season';
-import { holesInReach, profileShape } from '../zone';
 import { AdviceFigures } from './advice-figures';
+import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
+import { LongRun } from './long-run';
 import { SeasonStepper } from './season-stepper';
 import { ShareProjectionChart } from './share-projection-chart';
 import { TrunkDiagram } from './trunk-diagram';
@@ -108,16 +108,9 @@ function AdviceBody({
   onUseSpot?: (spot: AdvisedSpot) => void;
 }) {
   const { system } = useUnitSystem();
-  const tapholes = useTapholes(advice.treeId);
-  const shape = profileShape(advice.profile.key);
-  const inReach = holesInReach(tapholes.data?.items ?? [], {
-    season: advice.season,
-    depthCm: advice.depthCm,
-    radialGrowthCmPerYear: advice.radialGrowthCmPerYear,
-    zone: shape.zone,
-  });
-  // Wait for the record before drawing, so the drawing never claims a trunk free of old holes.
-  const drawTrunk = !tapholes.isPending && (advice.taps > 0 || inReach.length > 0);
+  // The holes the advisor spaced the new ones from; not sent when the advice is a plan row.
+  const inReach = advice.holesInReach ?? [];
+  const drawTrunk = advice.taps > 0 || inReach.length > 0;
 
   return (
     <div aria-busy={stale || undefined} className="flex flex-col gap-4">
@@ -125,7 +118,15 @@ function AdviceBody({
         <VerdictBadge verdict={advice.verdict} size="lg" />
         <p className="mt-2 text-lg font-bold">{adviceSentence(advice, advice.season, system)}</p>
         {advice.taps > 0 && (
-          <p className="mt-1">Drill with a {drillWords(advice.bitCm, advice.depthCm, system)}.</p>
+          <>
+            {advice.frozen && (
+              <p role="alert" className="mt-2 font-bold text-alert">
+                Wait to drill: the trunk is frozen.
+              </p>
+            )}
+            <p className="mt-1">Drill with a {drillWords(advice.bitCm, advice.depthCm, system)}.</p>
+            <RuleList rules={advice.drillingNotes} label="With the drilling" />
+          </>
         )}
         {onUseSpot && advice.placements.length > 0 && (
           <ul aria-label="Advised spots" className="mt-2 flex flex-col gap-2">
@@ -158,11 +159,11 @@ function AdviceBody({
       {advice.reasons.length > 0 && (
         <section aria-labelledby="advice-reasons-heading">
           <h3 id="advice-reasons-heading" className="font-bold">
-            {advice.taps >= advice.tableTaps
+            {advice.taps >= advice.guidelineTaps
               ? 'Reasons'
               : advice.taps === 0
                 ? 'Why no taps this season'
-                : `Why ${advice.taps} and not ${advice.tableTaps}`}
+                : `Why ${advice.taps} and not ${advice.guidelineTaps}`}
           </h3>
           <ul className="mt-1 list-disc space-y-1 pl-5">
             {advice.reasons.map((r) => (
@@ -176,9 +177,9 @@ function AdviceBody({
         <TrunkDiagram
           placements={advice.placements}
           priorHoles={inReach}
-          priorHolesUnknown={tapholes.isError}
+          priorHolesUnknown={advice.holesInReach === undefined}
           heightBand={advice.profile.heightBand}
-          stainLengthCm={shape.zone.stainLengthCm}
+          stainLengthCm={advice.profile.stainLengthCm}
           system={system}
         />
       )}
@@ -189,11 +190,14 @@ function AdviceBody({
         <>
           <AdviceFigures advice={advice} floor={advice.profile.floor} system={system} />
           {advice.projection && advice.tableTaps > 0 && (
-            <ShareProjectionChart
-              projection={advice.projection}
-              floor={advice.profile.floor}
-              tapsPerYear={advice.taps}
-            />
+            <div className="grid gap-4 md:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+              <ShareProjectionChart
+                projection={advice.projection}
+                floor={advice.profile.floor}
+                tapsPerYear={advice.taps}
+              />
+              <LongRun advice={advice} />
+            </div>
           )}
         </>
       )}
@@ -204,11 +208,17 @@ function AdviceBody({
 }
 
 function ProfileLine({ advice }: { advice: TreeAdvice }) {
+  const fastOnly = advice.tableTaps > advice.guidelineTaps;
   return (
     <div className="border-t border-rule pt-3 text-sm text-bark">
+      <GuidelineNotice notice={advice.profile.notice} />
       <p>
         Guideline: {advice.profile.label}
-        {advice.tableTaps > 0 && ` — ${advice.tableTaps} by its table at this size`}.
+        {advice.guidelineTaps > 0 &&
+          ` — ${advice.guidelineTaps} by its table at this size${
+            fastOnly ? `, ${advice.tableTaps} for a healthy fast grower` : ''
+          }`}
+        .
       </p>
       <WhyDisclosure source={advice.profile.source} />
     </div>

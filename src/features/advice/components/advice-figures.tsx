@@ -1,7 +1,8 @@
-import { in2ToCm2 } from '@shared/rules/index';
+import { in2ToCm2, publishedGrowth } from '@shared/rules/index';
 import type { TreeAdvice } from '@shared/schemas/plan';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 import { formatShare } from '../advice-words';
+import { WhyDisclosure } from '@/components/ui/why-disclosure';
 
 /** Basal-area growth a year, in² or cm². */
 function areaPerYear(in2: number, system: UnitSystem): string {
@@ -17,6 +18,16 @@ function growthWords(advice: TreeAdvice, system: UnitSystem): string {
       : 'Not measured over two seasons yet, so growth is taken as slow.';
   }
   return `${areaPerYear(advice.basalAreaGrowthIn2, system)} measured`;
+}
+
+const taps = (n: number) => `${n} ${n === 1 ? 'tap' : 'taps'}`;
+
+/** What healthy trees grew in the 2016 study, for context: "1.8 in²/yr at 10 in and 3.5 at 18 in". */
+function healthyWords(system: UnitSystem): string {
+  const [small, large] = publishedGrowth.healthy;
+  if (system === 'metric')
+    return `${formatNumber(in2ToCm2(small.in2PerYear), 0)} cm²/yr at 25 cm and ${formatNumber(in2ToCm2(large.in2PerYear), 0)} cm²/yr at 46 cm`;
+  return `${small.in2PerYear} in²/yr at ${small.dbhIn} in and ${large.in2PerYear} in²/yr at ${large.dbhIn} in`;
 }
 
 /** The figures behind the count: how much clear wood is left, and whether growth keeps up. */
@@ -42,7 +53,8 @@ export function AdviceFigures({
           {formatShare(advice.steadyStateShare)} in the long run at this rate
         </dd>
         <dd className="text-sm text-bark">
-          The chance a new hole finds clear wood. Keep it at or above {formatShare(floor)}.
+          The chance a new hole finds clear wood. Keep it at or above {formatShare(floor)}, the
+          floor Clearwood’s model is calibrated to.
         </dd>
       </div>
       {growing && (
@@ -50,9 +62,16 @@ export function AdviceFigures({
           <dt className="text-sm text-bark">Basal-area growth</dt>
           <dd className="font-bold tabular-nums">{growthWords(advice, system)}</dd>
           <dd className="text-sm text-bark">
-            At this size tapping needs at least {areaPerYear(advice.minimumGrowthIn2!, system)}.
+            {taps(advice.minimumGrowthTaps)} a year at this bit and depth need at least{' '}
+            {areaPerYear(advice.minimumGrowthIn2!, system)}.
             {advice.maxSustainableTaps > 0 &&
-              ` Growth covers the stain of ${advice.maxSustainableTaps} ${advice.maxSustainableTaps === 1 ? 'tap' : 'taps'} a year.`}
+              ` Growth covers the stain of ${taps(advice.maxSustainableTaps)} a year.`}
+          </dd>
+          <dd className="text-sm text-bark">
+            For comparison, healthy trees in the 2016 study grew about {healthyWords(system)}.
+          </dd>
+          <dd>
+            <WhyDisclosure source={publishedGrowth.source} />
           </dd>
         </div>
       )}

@@ -1,18 +1,23 @@
-import { useId, useState, type FormEvent } from 'react';
-import { crownDiebackClasses } from '@shared/schemas/measurement';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useId, useMemo, useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { crownDiebackClasses, type MeasurementInput } from '@shared/schemas/measurement';
 import { Field, controlClass } from '@/components/ui/field';
 import { cn } from '@/components/ui/cn';
+import { FormFooter } from '@/components/ui/form-footer';
 import { isApiError } from '@/lib/api-client';
+import { applyServerErrors } from '@/lib/form-errors';
 import { formatDate, formatDbh, todayIso, useUnitSystem } from '@/lib/units';
 import { useCreateMeasurement } from '../api/create-measurement';
+import { useMeasurements } from '../api/get-measurements';
 import {
-  isMeasurementField,
-  toMeasurementInput,
+  measurementFields,
+  measurementFormSchema,
+  outlierCheck,
+  outlierQuestion,
   type MeasureMode,
-  type MeasurementErrors,
   type MeasurementFormValues,
 } from './measurement-form-values';
-import { FormFooter } from '@/components/ui/form-footer';
 
 const modeLabels: Record<MeasureMode, string> = {
   diameter: 'Diameter',
@@ -30,70 +35,71 @@ function messageFor(error: unknown): string {
 export function MeasurementForm({ treeId }: { treeId: number }) {
   const headingId = useId();
   const { unit: preferredUnit } = useUnitSystem();
-  const [values, setValues] = useState<MeasurementFormValues>(() => ({
-    measuredOn: todayIso(),
-    mode: 'diameter',
-    value: '',
-    unit: preferredUnit,
-    crownDieback: '',
-    note: '',
-  }));
-  const [errors, setErrors] = useState<MeasurementErrors>({});
-  const [formError, setFormError] = useState<string>();
+  const history = useMeasurements(treeId);
+  // The standing record the advisor reads: rows no later row corrects.
+  const record = useMemo(
+    () => (history.data?.items ?? []).filter((m) => !m.superseded),
+    [history.data],
+  );
+  const schema = useMemo(() => measurementFormSchema(record), [record]);
+  const form = useForm<MeasurementFormValues, unknown, MeasurementInput>({
+    resolver: zodResolver(schema),
+    defaultValues: {
+      measuredOn: todayIso(),
+      mode: 'diameter',
+      dbhCm: '',
+      unit: preferredUnit,
+      crownDiebackPct: '',
+      note: '',
+      confirmedOutlier: false,
+    },
+  });
+  const { errors } = form.formState;
+  const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState<string>();
   const create = useCreateMeasurement(treeId);
+  const values = useWatch({ control: form.control }) as MeasurementFormValues;
+  const check = outlierCheck(values, record);
 
-  const set = <K extends keyof MeasurementFormValues>(key: K, value: MeasurementFormValues[K]) => {
-    setValues((v) => ({ ...v, [key]: value }));
+  const onSubmit = form.handleSubmit((input) => {
+    setFormError(null);
     setSaved(undefined);
-  };
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    setFormError(undefined);
-    setSaved(undefined);
-    const result = toMeasurementInput(values);
-    if (!result.ok) {
-      setErrors(result.errors);
-      return;
-    }
-    setErrors({});
-    create.mutate(result.input, {
+    const unit = form.getValues('unit');
+    create.mutate(input, {
       onSuccess: (m) => {
-        setSaved(`Saved: DBH ${formatDbh(m.dbhCm, values.unit)} on ${formatDate(m.measuredOn)}.`);
-        setValues((v) => ({ ...v, value: '', crownDieback: '', note: '' }));
+        setSaved(`Saved: DBH ${formatDbh(m.dbhCm, unit)} on ${formatDate(m.measuredOn)}.`);
+        form.reset({
+          ...form.getValues(),
+          dbhCm: '',
+          crownDiebackPct: '',
+          note: '',
+          confirmedOutlier: false,
+        });
       },
-      onError: (error) => {
-        const fieldErrors: MeasurementErrors = {};
-        const unplaced: string[] = [];
-        for (const [key, message] of Object.entries(
-          isApiError(error) ? (error.fields ?? {}) : {},
-        )) {
-          if (isMeasurementField(key)) fieldErrors[key] = message;
-          else unplaced.push(message);
-        }
-        setErrors(fieldErrors);
-        if (Object.keys(fieldErrors).length === 0 || unplaced.length > 0) {
-          setFormError(unplaced.length > 0 ? unplaced.join(' ') : messageFor(error));
-        }
-      },
+      onError: (error) =>
+        setFormError(applyServerErrors(error, form.setError, measurementFields, messageFor)),
     });
-  };
+  });
 
-  const valueLabel = modeLabels[values.mode];
+  const mode = values.mode;
+  const confirmError = errors.confirmedOutlier?.message;
   return (
     <section aria-labelledby={headingId} className="rounded border border-rule p-4">
       <h2 id={headingId} className="text-lg font-bold">
         Record measurement
       </h2>
-      <form noValidate onSubmit={onSubmit} className="mt-3 flex flex-col gap-4">
-        <Field label="Date" error={errors.measuredOn} className="max-w-xs">
+      <form
+        noValidate
+        onSubmit={onSubmit}
+        onChange={() => setSaved(undefined)}
+        className="mt-3 flex flex-col gap-4"
+      >
+        <Field label="Date" error={errors.measuredOn?.message} className="max-w-xs">
           {(control) => (
             <input
               {...control}
+              {...form.register('measuredOn')}
               type="date"
-              value={values.measuredOn}
-              onChange={(e) => set('measuredOn', e.target.value)}
               className={controlClass}
             />
           )}
@@ -102,17 +108,15 @@ export function MeasurementForm({ treeId }: { treeId: number }) {
         <fieldset>
           <legend className="text-sm font-bold">Measured as</legend>
           <div className="mt-1 flex gap-6">
-            {(Object.keys(modeLabels) as MeasureMode[]).map((mode) => (
-              <label key={mode} className="inline-flex min-h-11 items-center gap-2 md:min-h-8">
+            {(Object.keys(modeLabels) as MeasureMode[]).map((m) => (
+              <label key={m} className="inline-flex min-h-11 items-center gap-2 md:min-h-8">
                 <input
+                  {...form.register('mode')}
                   type="radio"
-                  name="measure-mode"
-                  value={mode}
-                  checked={values.mode === mode}
-                  onChange={() => set('mode', mode)}
+                  value={m}
                   className="h-5 w-5 accent-sap"
                 />
-                {modeLabels[mode]}
+                {modeLabels[m]}
               </label>
             ))}
           </div>
@@ -120,10 +124,10 @@ export function MeasurementForm({ treeId }: { treeId: number }) {
 
         <div className="flex flex-wrap items-start gap-3">
           <Field
-            label={valueLabel}
-            error={errors.dbhCm}
+            label={modeLabels[mode]}
+            error={errors.dbhCm?.message}
             hint={
-              values.mode === 'circumference'
+              mode === 'circumference'
                 ? 'Measured round the trunk at breast height; DBH = C ÷ π.'
                 : undefined
             }
@@ -132,23 +136,17 @@ export function MeasurementForm({ treeId }: { treeId: number }) {
             {(control) => (
               <input
                 {...control}
+                {...form.register('dbhCm')}
                 type="text"
                 inputMode="decimal"
                 autoComplete="off"
-                value={values.value}
-                onChange={(e) => set('value', e.target.value)}
                 className={cn(controlClass, 'tabular-nums')}
               />
             )}
           </Field>
           <Field label="Unit" className="w-24">
             {(control) => (
-              <select
-                {...control}
-                value={values.unit}
-                onChange={(e) => set('unit', e.target.value as MeasurementFormValues['unit'])}
-                className={controlClass}
-              >
+              <select {...control} {...form.register('unit')} className={controlClass}>
                 <option value="in">in</option>
                 <option value="cm">cm</option>
               </select>
@@ -156,14 +154,35 @@ export function MeasurementForm({ treeId }: { treeId: number }) {
           </Field>
         </div>
 
-        <Field label="Crown dieback" error={errors.crownDiebackPct} className="max-w-xs">
+        {(check || confirmError) && (
+          <div
+            role="group"
+            aria-label="Confirm the reading"
+            className="rounded border-l-4 border-sap bg-sap/10 px-4 py-3"
+          >
+            <p className="font-bold">{check ? outlierQuestion(check, values) : confirmError}</p>
+            <p className="mt-1 max-w-prose text-sm">
+              A change this size is usually a slipped tape or a typing error. Until it is confirmed,
+              the advice leaves it out.
+            </p>
+            <label className="mt-2 inline-flex min-h-11 items-center gap-2 md:min-h-8">
+              <input
+                {...form.register('confirmedOutlier')}
+                type="checkbox"
+                aria-invalid={Boolean(confirmError)}
+                className="h-5 w-5 accent-sap"
+              />
+              I measured again: this reading is right
+            </label>
+            {confirmError && (
+              <p className="text-sm text-alert">Confirm it, or correct the value.</p>
+            )}
+          </div>
+        )}
+
+        <Field label="Crown dieback" error={errors.crownDiebackPct?.message} className="max-w-xs">
           {(control) => (
-            <select
-              {...control}
-              value={values.crownDieback}
-              onChange={(e) => set('crownDieback', e.target.value)}
-              className={controlClass}
-            >
+            <select {...control} {...form.register('crownDiebackPct')} className={controlClass}>
               <option value="">Not rated</option>
               {crownDiebackClasses.map((pct) => (
                 <option key={pct} value={String(pct)}>
@@ -174,14 +193,13 @@ export function MeasurementForm({ treeId }: { treeId: number }) {
           )}
         </Field>
 
-        <Field label="Note" error={errors.note}>
+        <Field label="Note" error={errors.note?.message}>
           {(control) => (
             <textarea
               {...control}
+              {...form.register('note')}
               rows={2}
               maxLength={1000}
-              value={values.note}
-              onChange={(e) => set('note', e.target.value)}
               className={cn(controlClass, 'py-2')}
             />
           )}

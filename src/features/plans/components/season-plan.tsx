@@ -5,6 +5,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Pager, pageRange } from '@/components/ui/pager';
 import { Skeleton, TableSkeleton } from '@/components/ui/skeleton';
 import { UnitToggle } from '@/components/ui/unit-toggle';
+import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
 import { SeasonStepper } from '@/features/advice/components/season-stepper';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
 import { TreeListEmpty } from '@/features/trees/components/tree-list-empty';
@@ -119,6 +120,15 @@ export function SeasonPlan({
   return (
     <>
       {header}
+      <GuidelineNotice notice={data.profile.notice} />
+      {data.profile.seasonRules.length > 0 && (
+        <section aria-labelledby="season-rules-heading" className="mb-4">
+          <h2 id="season-rules-heading" className="font-bold">
+            This season, by the guideline
+          </h2>
+          <RuleList rules={data.profile.seasonRules} label="Rules for the season" />
+        </section>
+      )}
       <PlanTotalsStrip totals={totals} />
       <PlanWarningSummary
         counts={totals.warningsByCode}

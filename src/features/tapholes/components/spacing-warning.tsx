@@ -59,9 +59,10 @@ export function SpacingWarning({
           <p className="font-bold">Close to an earlier hole</p>
           <p className="mt-1 max-w-prose">{sentence(nearest, others.length, season, system)}</p>
           <p className="mt-1 max-w-prose">
-            Keep new holes at least {gap(spacing.sidewaysCm, system)} round the trunk or{' '}
-            {gap(spacing.verticalCm, system)} up or down from holes still in reach. If this is where
-            you drilled, save it as it is.
+            Keep new holes at least {gap(spacing.sidewaysCm, system)} round the trunk{' '}
+            {spacing.rule === 'both' ? 'and' : 'or'} {gap(spacing.verticalCm, system)} up or down
+            from holes still in reach, and out of their stain. If this is where you drilled, save it
+            as it is.
           </p>
         </div>
       )}

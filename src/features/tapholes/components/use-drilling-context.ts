@@ -53,12 +53,14 @@ export function useDrillingContext(treeId: number, sugarbushId: number) {
     const height = readHeight(values);
     const azimuth = readAzimuth(values);
     const depth = readDepth(values, defaults);
+    const bit = values.bitCm !== undefined ? Number(values.bitCm) : defaults.bitCm;
     if (!rules || !advice?.dbhCm || !tapholes || season === undefined) return [];
     if (!('cm' in height) || !('cm' in azimuth)) return [];
     return crowdedHoles({ heightCm: height.cm, azimuthDeg: azimuth.cm }, tapholes, {
       season,
       dbhCm: advice.dbhCm,
       depthCm: 'cm' in depth ? depth.cm : defaults.depthCm,
+      bitCm: Number.isFinite(bit) ? bit : defaults.bitCm,
       radialGrowthCmPerYear: advice.radialGrowthCmPerYear,
       rules,
     });

@@ -1,14 +1,14 @@
 import {
   arcDistanceCm,
-  isClearOf,
+  holesInReach,
   isProfileKey,
+  keepsClear,
   profiles,
   validateCustomProfile,
   type GuidelineProfile,
   type Spot,
 } from '@shared/rules/index';
 import type { Taphole } from '@shared/schemas/taphole';
-import { holesInReach } from '@/features/advice/zone';
 
 export type SpacingRules = Pick<GuidelineProfile, 'spacing' | 'zone'>;
 
@@ -30,7 +30,7 @@ export interface CrowdedHole {
 /**
  * Holes a new hole at `spot` comes too close to: those drilled earlier in the same season, and
  * those of earlier seasons whose stain it can still reach, nearer than the guideline's spacing
- * both round the trunk and up or down. Nearest first.
+ * (read as the guideline words it) or inside their stain column. Nearest first.
  */
 export function crowdedHoles(
   spot: Spot,
@@ -39,6 +39,8 @@ export function crowdedHoles(
     season: number;
     dbhCm: number;
     depthCm: number;
+    /** Bit of the new hole. */
+    bitCm: number;
     radialGrowthCmPerYear: number;
     rules: SpacingRules;
   },
@@ -49,8 +51,12 @@ export function crowdedHoles(
     ...holes.filter((h) => h.season === options.season),
     ...holesInReach(holes, { ...options, zone: rules.zone }),
   ];
+  const keepOut = {
+    spacing: rules.spacing,
+    column: { stainLengthCm: rules.zone.stainLengthCm, stainMarginCm: rules.zone.stainMarginCm },
+  };
   return nearby
-    .filter((h) => !isClearOf(spot, h, rules.spacing, circumference))
+    .filter((h) => !keepsClear(spot, options.bitCm, h, keepOut, circumference))
     .map((hole) => ({
       hole,
       sidewaysCm: arcDistanceCm(spot.azimuthDeg, hole.azimuthDeg, circumference),
