@@ -1,14 +1,12 @@
 import L from 'leaflet';
 import { useEffect, useRef } from 'react';
 import { useMap } from 'react-leaflet';
-import type { MapTree } from '@shared/schemas/map';
+import type { MapTree, MappedTree } from '../lib/map-stand';
 import { markerRadius, showsLetters, verdictStyle } from '../lib/verdict-style';
 import { TreeMarker, type TreeMarkerLook } from './tree-marker';
 
-type Mapped = MapTree & { lat: number; lng: number };
-
 interface TreeLayerProps {
-  trees: readonly Mapped[];
+  trees: readonly MappedTree[];
   selectedId: number | undefined;
   onSelect: (treeId: number) => void;
 }
@@ -27,7 +25,7 @@ const lookOf = (tree: MapTree, zoom: number, selected: boolean): TreeMarkerLook 
 export function TreeLayer({ trees, selectedId, onSelect }: TreeLayerProps) {
   const map = useMap();
   const groupRef = useRef<L.LayerGroup | null>(null);
-  const markersRef = useRef(new Map<number, { marker: TreeMarker; tree: Mapped }>());
+  const markersRef = useRef(new Map<number, { marker: TreeMarker; tree: MappedTree }>());
   const selectedRef = useRef(selectedId);
   const onSelectRef = useRef(onSelect);
 
