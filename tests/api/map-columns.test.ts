@@ -218,7 +218,10 @@ describe('the map query', () => {
     const version = Number(
       (await t.db('sugarbushes').where({ id: standId }).first('advice_version')).advice_version,
     );
-    const { sql, bindings } = mapRepository(t.db).standRowsQuery(standId, SEASON, version);
+    const { sql, bindings } = mapRepository(t.db)
+      .standRows(standId, SEASON, version)
+      .toSQL()
+      .toNative();
     const plan: { detail: string }[] = await t.db.raw(`explain query plan ${sql}`, [...bindings]);
     const steps = plan.map((p) => p.detail);
     expect(steps).toContainEqual(

@@ -17,41 +17,38 @@ export interface StandRow {
 }
 
 export function mapRepository(db: Knex) {
-  /**
-   * Every tree of the stand in tag order, with its stored advice for the season: the row made
-   * from the tree's current record and this guideline version, looked up by its primary key.
-   * Columns only; the advice's JSON is never read here.
-   */
-  const standRows = (sugarbushId: number, season: number, standVersion: number) =>
-    db('trees as t')
-      .leftJoin('tree_advice as a', function () {
-        this.on('a.tree_id', 't.id')
-          .andOn('a.season', db.raw('?', [season]))
-          .andOn('a.stand_version', db.raw('?', [standVersion]))
-          .andOn('a.tree_version', 't.record_version');
-      })
-      .where('t.sugarbush_id', sugarbushId)
-      .orderBy('t.tag')
-      .select(
-        't.id',
-        't.tag',
-        't.lat',
-        't.lng',
-        't.species',
-        't.status',
-        'a.verdict',
-        'a.taps',
-        'a.warning_mask',
-        'a.dbh_cm',
-      );
-
   return {
-    standRows: (sugarbushId: number, season: number, standVersion: number) =>
-      standRows(sugarbushId, season, standVersion) as Promise<StandRow[]>,
-
-    /** The statement `standRows` runs, for checking its query plan. */
-    standRowsQuery: (sugarbushId: number, season: number, standVersion: number) =>
-      standRows(sugarbushId, season, standVersion).toSQL().toNative(),
+    /**
+     * Every tree of the stand in tag order, with its stored advice for the season: the row made
+     * from the tree's current record and this guideline version, looked up by its primary key.
+     * Columns only; the advice's JSON is never read here. (A query: await it for the rows.)
+     */
+    standRows: (
+      sugarbushId: number,
+      season: number,
+      standVersion: number,
+    ): Knex.QueryBuilder<StandRow, StandRow[]> =>
+      db<StandRow>('trees as t')
+        .leftJoin('tree_advice as a', function () {
+          this.on('a.tree_id', 't.id')
+            .andOn('a.season', db.raw('?', [season]))
+            .andOn('a.stand_version', db.raw('?', [standVersion]))
+            .andOn('a.tree_version', 't.record_version');
+        })
+        .where('t.sugarbush_id', sugarbushId)
+        .orderBy('t.tag')
+        .select(
+          't.id',
+          't.tag',
+          't.lat',
+          't.lng',
+          't.species',
+          't.status',
+          'a.verdict',
+          'a.taps',
+          'a.warning_mask',
+          'a.dbh_cm',
+        ),
 
     /** The stand's change counter: bumped by every change to what its map or figures show. */
     async recordSeq(sugarbushId: number): Promise<number> {

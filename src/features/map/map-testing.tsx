@@ -8,8 +8,6 @@ import type { Sugarbush } from '@shared/schemas/sugarbush';
 import type { MapTree } from './lib/map-stand';
 import { columnsOf, mapTree, treeAdviceOf, treeRecordOf } from './map-fixtures';
 
-export { mapTree };
-
 export const trees: MapTree[] = [
   mapTree({ id: 1, tag: '0412', warnings: ['slow-growth'] }),
   mapTree({ id: 2, tag: '0007', verdict: 'rest', taps: 0 }),

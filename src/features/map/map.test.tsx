@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { json } from '@/test/api-mock';
-import { cardRoutes, mapTree, openMap, params } from './map-testing';
+import { mapTree } from './map-fixtures';
+import { cardRoutes, openMap, params } from './map-testing';
 
 // jsdom has no canvas, so Leaflet stays out: see the stand-in.
 vi.mock('./components/map-view', () => import('./map-view-stand-in'));

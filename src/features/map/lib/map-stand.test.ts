@@ -8,7 +8,12 @@ const answer: MapColumns = {
   count: 4,
   codes: {
     verdict: ['tap', 'tap-reduced', 'rest', 'too-small', 'retired', 'unmeasured'],
-    warning: ['undersized', 'overtapped', 'too-close', 'slow-growth'] as MapColumns['codes']['warning'],
+    warning: [
+      'undersized',
+      'overtapped',
+      'too-close',
+      'slow-growth',
+    ] as MapColumns['codes']['warning'],
     status: ['active', 'held-out', 'dead', 'removed'],
     species: ['sugar-maple', 'red-maple'] as MapColumns['codes']['species'],
   },
