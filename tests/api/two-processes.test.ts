@@ -115,6 +115,30 @@ describe(`two app processes on one ${engineName} database`, () => {
   });
 });
 
+describe(`sign-in throttles across two processes on ${engineName}`, () => {
+  it('when wrong passwords are tried through both processes, then they count against one limit', async () => {
+    const a = await makeTestApp({ LOGIN_RATE_LIMIT: '3' });
+    const b = await makeTestApp({ LOGIN_RATE_LIMIT: '3' }, a.database);
+    try {
+      const { users } = await standWithTeam(a.db);
+      const statuses: number[] = [];
+      for (const app of [a.app, b.app, a.app, b.app]) {
+        const agent = request.agent(app);
+        const { body } = await agent.get('/api/auth/csrf');
+        const res = await agent
+          .post('/api/auth/login')
+          .set('x-csrf-token', body.token)
+          .send({ email: users.owner, password: 'not-the-password' });
+        statuses.push(res.status);
+      }
+      expect(statuses).toEqual([401, 401, 401, 429]);
+    } finally {
+      await b.close();
+      await a.close();
+    }
+  });
+});
+
 const asJson = <T>(v: T): T => JSON.parse(JSON.stringify(v)) as T;
 
 const planItemTaps = (plan: { items: { treeId: number; taps: number }[] }, treeId: number) =>
