@@ -7,6 +7,11 @@ import type { Knex } from 'knex';
  * columns use `t.double` (a PostgreSQL test fails on any `real` column left).
  */
 export async function up(knex: Knex): Promise<void> {
+  await widenRealColumns(knex);
+}
+
+/** Every `real` column of the schema becomes `double precision` (PostgreSQL only). */
+export async function widenRealColumns(knex: Knex): Promise<void> {
   if (knex.client.config.client !== 'pg') return;
   const { rows } = await knex.raw<{ rows: { table_name: string; column_name: string }[] }>(
     `select table_name, column_name from information_schema.columns

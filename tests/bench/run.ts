@@ -9,6 +9,7 @@ import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { loadConfig } from '../../server/config';
 import { createBackground } from '../../server/lib/background';
+import { createAdviceJobs } from '../../server/modules/advice/advice-jobs';
 import { quietLogger } from '../../server/lib/logger';
 import { createDb, migrateLatest } from '../../server/db';
 import { createMailer } from '../../server/mail/mailer';
@@ -67,6 +68,7 @@ async function benchPlan() {
     log: quietLogger,
     mailer: createMailer(config, db, quietLogger),
     background: createBackground(quietLogger),
+    advice: createAdviceJobs({ db, database: config.database, log: quietLogger }),
   });
   const endpoint = await time(() =>
     service.planForStand(standId, { page: 1, pageSize: 50, season: SEASON }),
