@@ -104,6 +104,31 @@ describe(`two app processes on one ${engineName} database`, () => {
     );
   });
 
+  it('when the guideline and sunny side change through the second, then the first plans every tree by them', async () => {
+    const s = await sessionFromFirst(team.users.owner);
+    const planUrl = `/api/sugarbushes/${team.standId}/plan?season=${SEASON}`;
+    const before = await s.agent.get(planUrl);
+    expect(before.body.profile.key).toBe('conservative');
+    const itemOf = (body: { items: { treeId: number }[] }) =>
+      body.items.find((i) => i.treeId === team.treeId);
+    const patched = await request(second.app)
+      .patch(`/api/sugarbushes/${team.standId}`)
+      .set('Cookie', s.cookie)
+      .set('x-csrf-token', s.csrf)
+      .send({ profile: 'traditional', sunnyAzimuthDeg: 135 });
+    expect(patched.status).toBe(200);
+
+    const plan = await s.agent.get(planUrl);
+    expect(plan.status).toBe(200);
+    expect(plan.body.profile.key).toBe('traditional');
+    const record = await recordOf(s.agent, team.treeId);
+    const fresh = asJson(
+      adviseTree(record, { season: SEASON, profile: 'traditional', sunnyAzimuthDeg: 135 }),
+    );
+    expect(itemOf(plan.body)).toMatchObject(fresh);
+    expect(itemOf(plan.body)).not.toEqual(itemOf(before.body));
+  });
+
   it('when the session is ended through the second, then the first no longer accepts it', async () => {
     const s = await sessionFromFirst(team.users.tapper);
     const out = await request(second.app)
@@ -138,6 +163,42 @@ describe(`sign-in throttles across two processes on ${engineName}`, () => {
     }
   });
 });
+
+/** A tree's standing record as the API lists it: readings no later row corrects, every hole. */
+async function recordOf(agent: request.Agent, treeId: number): Promise<StandTree> {
+  const [tree, ms, hs] = await Promise.all([
+    agent.get(`/api/trees/${treeId}`),
+    agent.get(`/api/trees/${treeId}/measurements?pageSize=100`),
+    agent.get(`/api/trees/${treeId}/tapholes?pageSize=100`),
+  ]);
+  type M = {
+    measuredOn: string;
+    dbhCm: number;
+    crownDiebackPct: number | null;
+    superseded: boolean;
+  };
+  type H = StandTree['tapholes'][number];
+  return {
+    species: tree.body.species,
+    status: tree.body.status,
+    measurements: (ms.body.items as M[])
+      .filter((m) => !m.superseded)
+      .sort((a, b) => a.measuredOn.localeCompare(b.measuredOn))
+      .map((m) => ({
+        measuredOn: m.measuredOn,
+        dbhCm: m.dbhCm,
+        crownDiebackPct: m.crownDiebackPct,
+      })),
+    tapholes: (hs.body.items as H[]).map((h) => ({
+      season: h.season,
+      heightCm: h.heightCm,
+      azimuthDeg: h.azimuthDeg,
+      depthCm: h.depthCm,
+      bitCm: h.bitCm,
+      collection: h.collection,
+    })),
+  };
+}
 
 const asJson = <T>(v: T): T => JSON.parse(JSON.stringify(v)) as T;
 
