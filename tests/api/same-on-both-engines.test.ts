@@ -91,6 +91,26 @@ describe(`values on ${engineName}`, () => {
   });
 });
 
+describe(`sessions on ${engineName}`, () => {
+  it('when a stored session has expired, then it no longer signs anyone in', async () => {
+    const s = await signIn(t.app, team.users.consultant);
+    expect((await s.agent.get('/api/auth/me')).status).toBe(200);
+    await t
+      .db('sessions')
+      .whereLike('sess', `%"passport":{"user":${s.me.user.id}}%`)
+      .update({ expired: new Date(Date.now() - 60_000).toISOString() });
+    expect((await s.agent.get('/api/auth/me')).status).toBe(401);
+  });
+});
+
+// PRAGMAs are SQLite's own: PostgreSQL enforces foreign keys and needs no journal setting.
+describe.skipIf(onPostgres)('the SQLite connection', () => {
+  it('when a connection is pooled, then it enforces foreign keys and writes ahead', async () => {
+    expect(await t.db.raw('PRAGMA foreign_keys')).toEqual([{ foreign_keys: 1 }]);
+    expect(await t.db.raw('PRAGMA journal_mode')).toEqual([{ journal_mode: 'wal' }]);
+  });
+});
+
 describe.skipIf(!onPostgres)('the PostgreSQL schema', () => {
   it('when migrated, then no column is single precision (real keeps only about seven digits)', async () => {
     const { rows } = await t.db.raw(
