@@ -100,9 +100,20 @@ async function migratedTemplate(): Promise<string> {
         await db.destroy();
       }
       await client.query(`alter database ${building} rename to ${name}`);
+      await dropOlderTemplates(client, name);
     }
   } finally {
     await client.query('select pg_advisory_unlock($1)', [lock]);
   }
   return name;
+}
+
+/** Templates of earlier migration sets; one still being copied from is left for next time. */
+async function dropOlderTemplates(client: pg.Client, keep: string): Promise<void> {
+  const { rows } = await client.query<{ datname: string }>(
+    `select datname from pg_database where datname ~ '^clearwood_template_[0-9a-f]{12}$' and datname <> $1`,
+    [keep],
+  );
+  for (const { datname } of rows)
+    await client.query(`drop database if exists ${datname}`).catch(() => undefined);
 }
