@@ -68,7 +68,7 @@ async function benchPlan() {
     log: quietLogger,
     mailer: createMailer(config, db, quietLogger),
     background: createBackground(quietLogger),
-    advice: createAdviceJobs({ db, databaseFile: file, log: quietLogger }),
+    advice: createAdviceJobs({ db, database: config.database, log: quietLogger }),
   });
   const endpoint = await time(() =>
     service.planForStand(standId, { page: 1, pageSize: 50, season: SEASON }),
