@@ -5,6 +5,7 @@ import { mapRepository } from '../../server/modules/map/map.repository';
 import type { MapColumns } from '../../shared/schemas/map';
 import type { PlanItem, StandPlanResponse } from '../../shared/schemas/plan';
 import { makeTestApp, signIn } from './test-app';
+import { onPostgres } from './test-database';
 
 const SEASON = 2027;
 
@@ -213,27 +214,30 @@ describe('the map answer cached by the browser', () => {
 });
 
 describe('the map query', () => {
-  it('reaches each tree by the stand index and its stored advice by the primary key, without a sort', async () => {
-    if (t.db.client.config.client !== 'better-sqlite3') return; // SQLite's own plan format
-    const version = Number(
-      (await t.db('sugarbushes').where({ id: standId }).first('advice_version')).advice_version,
-    );
-    const { sql, bindings } = mapRepository(t.db)
-      .standRows(standId, SEASON, version)
-      .toSQL()
-      .toNative();
-    const plan: { detail: string }[] = await t.db.raw(`explain query plan ${sql}`, [...bindings]);
-    const steps = plan.map((p) => p.detail);
-    expect(steps).toContainEqual(
-      expect.stringMatching(/^SEARCH t USING (COVERING )?INDEX trees_sugarbush_id_tag_unique/),
-    );
-    expect(steps).toContainEqual(
-      expect.stringMatching(
-        /^SEARCH a USING INDEX sqlite_autoindex_tree_advice_1 \(tree_id=\? AND season=\?\)/,
-      ),
-    );
-    expect(steps.filter((s) => /^SCAN|TEMP B-TREE/.test(s))).toEqual([]);
-  });
+  // SQLite's own plan format; PostgreSQL picks by cost, and on a small table may rightly scan.
+  it.skipIf(onPostgres)(
+    'reaches each tree by the stand index and its stored advice by the primary key, without a sort',
+    async () => {
+      const version = Number(
+        (await t.db('sugarbushes').where({ id: standId }).first('advice_version')).advice_version,
+      );
+      const { sql, bindings } = mapRepository(t.db)
+        .standRows(standId, SEASON, version)
+        .toSQL()
+        .toNative();
+      const plan: { detail: string }[] = await t.db.raw(`explain query plan ${sql}`, [...bindings]);
+      const steps = plan.map((p) => p.detail);
+      expect(steps).toContainEqual(
+        expect.stringMatching(/^SEARCH t USING (COVERING )?INDEX trees_sugarbush_id_tag_unique/),
+      );
+      expect(steps).toContainEqual(
+        expect.stringMatching(
+          /^SEARCH a USING INDEX sqlite_autoindex_tree_advice_1 \(tree_id=\? AND season=\?\)/,
+        ),
+      );
+      expect(steps.filter((s) => /^SCAN|TEMP B-TREE/.test(s))).toEqual([]);
+    },
+  );
 
   it('reads stored columns only: with every stored advice text unreadable, the map and figures answer as before', async () => {
     const [map, figures] = await Promise.all([
