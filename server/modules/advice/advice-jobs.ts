@@ -5,7 +5,8 @@ import type { DatabaseTarget } from '../../config';
 import { AppError } from '../../errors';
 import type { Logger } from '../../lib/logger';
 import type { AdviceStatus } from '../../../shared/schemas/advice-status';
-import { adviceRepository } from './advice.repository';
+import type { PlanTotals } from '../../../shared/rules/index';
+import { adviceRepository, type PlanFilter } from './advice.repository';
 import type { AdviceTask, PlannedTree } from './advice-worker-tasks';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
@@ -22,6 +23,15 @@ export interface AdviceJobs {
   /** Resolves with the guideline version whose rows are complete for the season, once they are. */
   ensure(sugarbushId: number, season: number, opts?: { recheck?: boolean }): Promise<number>;
   status(sugarbushId: number, season: number): Promise<AdviceStatus>;
+  /** Whole-stand reads of the stored rows, in a worker: the season's totals … */
+  totals(sugarbushId: number, season: number, standVersion: number): Promise<PlanTotals>;
+  /** … and the ids of the rows a filter keeps, in a sort's order. */
+  orderedIds(
+    sugarbushId: number,
+    season: number,
+    standVersion: number,
+    filter: PlanFilter & { sort?: string },
+  ): Promise<number[]>;
   /** Every tree's taps and verdict under another guideline, computed in a worker, not stored. */
   planWith(
     sugarbushId: number,
@@ -145,6 +155,14 @@ export function createAdviceJobs(opts: {
         log.error(`Advice for stand ${sugarbushId}, season ${season} failed`, err),
       );
       return { season, state: 'updating', done: 0, total: Number(state?.total ?? 0) };
+    },
+
+    totals(sugarbushId, season, standVersion) {
+      return task<PlanTotals>({ kind: 'totals', sugarbushId, season, standVersion });
+    },
+
+    orderedIds(sugarbushId, season, standVersion, filter) {
+      return task<number[]>({ kind: 'order', sugarbushId, season, standVersion, filter });
     },
 
     planWith(sugarbushId, season, guideline) {

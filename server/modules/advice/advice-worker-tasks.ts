@@ -1,9 +1,9 @@
 import type { Knex } from 'knex';
 import type { DatabaseTarget } from '../../config';
 import { openDb } from '../../db';
-import { adviseTree } from '../../../shared/rules/index';
+import { adviseTree, type PlanTotals } from '../../../shared/rules/index';
 import { loadStandTrees } from '../plans/plans.repository';
-import { adviceRepository } from './advice.repository';
+import { adviceRepository, type PlanFilter } from './advice.repository';
 import { adviseAndStore } from './advise-and-store';
 import { profileOf, standGuideline } from './stand-guideline';
 
@@ -20,6 +20,10 @@ export type AdviceTask =
   | (OnStand & { kind: 'stale'; standVersion: number })
   /** Advise these trees and store the rows. */
   | (OnStand & { kind: 'advise'; treeIds: number[] })
+  /** The season's totals over the stand's current rows. */
+  | (OnStand & { kind: 'totals'; standVersion: number })
+  /** The ids of the current rows matching a filter, in a sort's order. */
+  | (OnStand & { kind: 'order'; standVersion: number; filter: PlanFilter & { sort?: string } })
   /** Every tree under another guideline, answered and not stored (a preview). */
   | (OnStand & { kind: 'plan-with'; guideline: { profile: string; customJson: string | null } });
 
@@ -47,10 +51,21 @@ function dbFor(target: DatabaseTarget): Knex {
   return db;
 }
 
-export async function runAdviceTask(task: AdviceTask): Promise<number[] | number | PlannedTree[]> {
+export async function runAdviceTask(
+  task: AdviceTask,
+): Promise<number[] | number | PlannedTree[] | PlanTotals> {
   const db = dbFor(task.database);
   if (task.kind === 'stale')
     return adviceRepository(db).staleTreeIds(task.sugarbushId, task.season, task.standVersion);
+  if (task.kind === 'totals')
+    return adviceRepository(db).totals(task.sugarbushId, task.season, task.standVersion);
+  if (task.kind === 'order')
+    return adviceRepository(db).orderedIds(
+      task.sugarbushId,
+      task.season,
+      task.standVersion,
+      task.filter,
+    );
   if (task.kind === 'advise')
     return adviseAndStore(db, task.sugarbushId, task.season, task.treeIds);
   const { sunnyAzimuthDeg } = await standGuideline(db, task.sugarbushId);

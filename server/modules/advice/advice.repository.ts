@@ -25,17 +25,18 @@ export interface PlanFilter {
 export type PlanSortKey = 'tag' | 'taps' | 'dbh' | 'share' | 'verdict';
 
 export function adviceRepository(db: Knex) {
-  /** Stored rows made from the tree's current record and the stand's current guideline. */
+  /**
+   * Stored rows made from the tree's current record and the stand's current guideline. Written
+   * from the trees' side, so tag order walks the (stand, tag) index and stops at the page's end.
+   */
   const current = (sugarbushId: number, season: number, standVersion: number) =>
-    db('tree_advice as a')
-      .join('trees as t', function () {
-        this.on('t.id', 'a.tree_id').andOn('t.record_version', 'a.tree_version');
+    db('trees as t')
+      .join('tree_advice as a', function () {
+        this.on('a.tree_id', 't.id').andOn('a.season', db.raw('?', [season]));
       })
-      .where({
-        'a.sugarbush_id': sugarbushId,
-        'a.season': season,
-        'a.stand_version': standVersion,
-      });
+      .where('t.sugarbush_id', sugarbushId)
+      .where('a.stand_version', standVersion)
+      .whereRaw('a.tree_version = t.record_version');
 
   const filtered = (
     sugarbushId: number,
@@ -114,20 +115,43 @@ export function adviceRepository(db: Knex) {
         .merge();
     },
 
-    /** One page of the plan, in SQL: filters, sort (ties by tag), offset and limit. */
-    async page(
+    /**
+     * A page in tag order with no filter: the (stand, tag) index gives the order, so this reads
+     * only the page's rows however large the stand.
+     */
+    async tagPage(
       sugarbushId: number,
       season: number,
       standVersion: number,
-      opts: PlanFilter & { sort?: string; offset: number; limit: number },
-    ): Promise<{ items: { treeId: number; tag: string; payload: string }[]; total: number }> {
+      opts: { descending: boolean; offset: number; limit: number },
+    ): Promise<{ treeId: number; tag: string; payload: string }[]> {
+      const rows: { id: number; tag: string; payload: string }[] = await current(
+        sugarbushId,
+        season,
+        standVersion,
+      )
+        .orderBy('t.tag', opts.descending ? 'desc' : 'asc')
+        .offset(opts.offset)
+        .limit(opts.limit)
+        .select('t.id', 't.tag', 'a.payload');
+      return rows.map((r) => ({ treeId: Number(r.id), tag: r.tag, payload: r.payload }));
+    },
+
+    /**
+     * Every matching tree in the plan's order (filters, sort, ties by tag): the list a filtered or
+     * re-sorted plan pages through. Whole-stand work: run it in a worker and keep the answer.
+     */
+    async orderedIds(
+      sugarbushId: number,
+      season: number,
+      standVersion: number,
+      opts: PlanFilter & { sort?: string },
+    ): Promise<number[]> {
       const base = filtered(sugarbushId, season, standVersion, opts);
-      if (!base) return { items: [], total: 0 };
-      const [{ n }] = await base.clone().count({ n: '*' });
+      if (!base) return [];
       const key = (opts.sort ?? 'tag').replace(/^-/, '') as PlanSortKey;
       const dir = opts.sort?.startsWith('-') ? 'desc' : 'asc';
-      const rows: { id: number; tag: string; payload: string }[] = await base
-        .clone()
+      const rows: { id: number }[] = await base
         .modify((q) => {
           if (key === 'share')
             q.orderByRaw(
@@ -139,13 +163,26 @@ export function adviceRepository(db: Knex) {
           else if (key === 'verdict') q.orderBy('a.verdict', dir);
           q.orderBy('t.tag', key === 'tag' ? dir : 'asc');
         })
-        .offset(opts.offset)
-        .limit(opts.limit)
+        .select('t.id');
+      return rows.map((r) => Number(r.id));
+    },
+
+    /** The stored advice of these trees for the season, by tree id (one primary-key read each). */
+    async payloads(
+      season: number,
+      standVersion: number,
+      treeIds: readonly number[],
+    ): Promise<Map<number, { tag: string; payload: string }>> {
+      if (treeIds.length === 0) return new Map();
+      const rows: { id: number; tag: string; payload: string }[] = await db('trees as t')
+        .join('tree_advice as a', function () {
+          this.on('a.tree_id', 't.id').andOn('a.season', db.raw('?', [season]));
+        })
+        .whereIn('t.id', treeIds)
+        .where('a.stand_version', standVersion)
+        .whereRaw('a.tree_version = t.record_version')
         .select('t.id', 't.tag', 'a.payload');
-      return {
-        items: rows.map((r) => ({ treeId: Number(r.id), tag: r.tag, payload: r.payload })),
-        total: Number(n),
-      };
+      return new Map(rows.map((r) => [Number(r.id), { tag: r.tag, payload: r.payload }]));
     },
 
     /** The season's totals over the stand, in one aggregate query. */

@@ -1,6 +1,6 @@
 import type { AppContext } from '../../context';
 import { AppError } from '../../errors';
-import { adviseTree, type GuidelineProfile, type PlanTotals } from '../../../shared/rules/index';
+import { adviseTree, type GuidelineProfile } from '../../../shared/rules/index';
 import {
   upcomingSeason,
   type PlanItem,
@@ -58,19 +58,57 @@ export function plansService(ctx: AppContext) {
     };
   }
 
-  /** Totals change only with the stand's record or guideline: kept per change counter. */
-  const totalsCache = new Map<string, Promise<PlanTotals>>();
-  async function totalsFor(sugarbushId: number, season: number, version: number) {
-    const seq = await ctx.db('sugarbushes').where({ id: sugarbushId }).first('record_seq');
-    const key = `${sugarbushId}:${season}:${version}:${seq?.record_seq}`;
-    let totals = totalsCache.get(key);
-    if (!totals) {
-      totals = store.totals(sugarbushId, season, version);
-      totalsCache.set(key, totals);
-      totals.catch(() => totalsCache.delete(key));
-      while (totalsCache.size > 64) totalsCache.delete(totalsCache.keys().next().value!);
+  /**
+   * Whole-stand reads (totals, a filtered or re-sorted order) change only with the stand's record
+   * or guideline: each is worked out once in a worker per change counter and kept here.
+   */
+  const kept = new Map<string, Promise<unknown>>();
+  async function keep<T>(key: string, work: () => Promise<T>): Promise<T> {
+    let value = kept.get(key) as Promise<T> | undefined;
+    if (!value) {
+      value = work();
+      kept.set(key, value);
+      value.catch(() => kept.delete(key));
+      while (kept.size > 32) kept.delete(kept.keys().next().value!);
     }
-    return totals;
+    return value;
+  }
+  async function stamp(sugarbushId: number, season: number, version: number) {
+    const row = await ctx.db('sugarbushes').where({ id: sugarbushId }).first('record_seq');
+    return `${sugarbushId}:${season}:${version}:${row?.record_seq}`;
+  }
+  async function totalsFor(sugarbushId: number, season: number, version: number) {
+    const key = `${await stamp(sugarbushId, season, version)}:totals`;
+    return keep(key, () => ctx.advice.totals(sugarbushId, season, version));
+  }
+
+  /** The page's trees: straight from the tag index when unfiltered, else from the kept order. */
+  async function pageOfPlan(sugarbushId: number, season: number, version: number, q: PlanQuery) {
+    const offset = (q.page - 1) * q.pageSize;
+    const sortKey = (q.sort ?? 'tag').replace(/^-/, '');
+    if (!q.q && !q.verdict && !q.warning && sortKey === 'tag') {
+      const [items, totals] = await Promise.all([
+        store.tagPage(sugarbushId, season, version, {
+          descending: q.sort === '-tag',
+          offset,
+          limit: q.pageSize,
+        }),
+        totalsFor(sugarbushId, season, version),
+      ]);
+      return { items, total: totals.trees };
+    }
+    const filter = { q: q.q, verdict: q.verdict, warning: q.warning, sort: q.sort };
+    const key = `${await stamp(sugarbushId, season, version)}:order:${JSON.stringify(filter)}`;
+    const ids = await keep(key, () => ctx.advice.orderedIds(sugarbushId, season, version, filter));
+    const pageIds = ids.slice(offset, offset + q.pageSize);
+    const rows = await store.payloads(season, version, pageIds);
+    return {
+      items: pageIds.flatMap((id) => {
+        const row = rows.get(id);
+        return row ? [{ treeId: id, ...row }] : [];
+      }),
+      total: ids.length,
+    };
   }
 
   async function complete(sugarbushId: number, season: number, version: number) {
@@ -147,14 +185,7 @@ export function plansService(ctx: AppContext) {
       if (!(await complete(sugarbushId, season, version)))
         version = await ctx.advice.ensure(sugarbushId, season, { recheck: true });
       const [page, totals] = await Promise.all([
-        store.page(sugarbushId, season, version, {
-          q: q.q,
-          verdict: q.verdict,
-          warning: q.warning,
-          sort: q.sort,
-          offset: (q.page - 1) * q.pageSize,
-          limit: q.pageSize,
-        }),
+        pageOfPlan(sugarbushId, season, version, q),
         totalsFor(sugarbushId, season, version),
       ]);
       return {

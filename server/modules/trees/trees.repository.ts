@@ -74,7 +74,10 @@ export function treesRepository(db: Knex) {
       const column = sortColumns[(f.sort ?? 'tag').replace(/^-/, '')] ?? 't.tag';
       const rows: Row[] = await q
         .select(columns)
-        .orderByRaw(`${column} is null`)
+        .modify((qb) => {
+          // Only DBH may be missing; an "is null" term on the others would defeat their index.
+          if (column === 't.latest_dbh_cm') qb.orderByRaw(`${column} is null`);
+        })
         .orderBy(column, desc ? 'desc' : 'asc')
         .orderBy('t.tag', 'asc')
         .offset(f.offset)
