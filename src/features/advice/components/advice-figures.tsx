@@ -1,7 +1,7 @@
 import { in2ToCm2, publishedGrowth } from '@shared/rules/index';
 import type { TreeAdvice } from '@shared/schemas/plan';
 import { formatNumber, type UnitSystem } from '@/lib/units';
-import { formatShare } from '../advice-words';
+import { formatShare } from '@/lib/advice-words';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
 
 /** Basal-area growth a year, in² or cm². */

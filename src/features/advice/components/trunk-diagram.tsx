@@ -2,7 +2,7 @@ import { useId } from 'react';
 import type { Spot } from '@shared/rules/index';
 import type { Taphole } from '@shared/schemas/taphole';
 import { cmToIn, type UnitSystem } from '@/lib/units';
-import { compassWord, formatHeight, spotWords } from '../advice-words';
+import { compassWord, formatHeight, spotWords } from '@/lib/advice-words';
 
 interface Props {
   placements: readonly Spot[];

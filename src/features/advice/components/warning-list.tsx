@@ -1,5 +1,5 @@
 import type { AdvisorWarning } from '@shared/rules/index';
-import { warningLabel } from '../warning-labels';
+import { warningLabel } from '@/lib/warning-labels';
 import { WarningMark } from './warning-chip';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
 

@@ -7,7 +7,7 @@ import {
 import { cn } from '@/components/ui/cn';
 import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningMark } from '@/features/advice/components/warning-chip';
-import { warningLabel } from '@/features/advice/warning-labels';
+import { warningLabel } from '@/lib/warning-labels';
 import { formatNumber } from '@/lib/units';
 
 const figures: { key: keyof PlanTotals; label: string; verdict?: VerdictKey }[] = [

@@ -2,10 +2,10 @@ import { Link } from 'react-router';
 import type { PlanItem } from '@shared/schemas/plan';
 import { DataTable, type Column, type TableSort } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
-import { shortPlacements, formatShare } from '@/features/advice/advice-words';
+import { shortPlacements, formatShare } from '@/lib/advice-words';
 import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningChip } from '@/features/advice/components/warning-chip';
-import { seasonParam } from '@/features/advice/season';
+import { seasonParam } from '@/lib/season';
 import { formatDbh, lengthUnitOf, type UnitSystem } from '@/lib/units';
 
 /** A warning that says no more than the verdict beside it is left out of the row. */

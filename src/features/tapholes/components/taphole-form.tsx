@@ -2,7 +2,7 @@ import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { collections, type Collection } from '@shared/schemas/enums';
 import { Field, controlClass } from '@/components/ui/field';
 import { cn } from '@/components/ui/cn';
-import { compassWord, formatHeight } from '@/features/advice/advice-words';
+import { compassWord, formatHeight } from '@/lib/advice-words';
 import { isApiError } from '@/lib/api-client';
 import { todayIso, useUnitSystem } from '@/lib/units';
 import { useCreateTaphole } from '../api/create-taphole';
