@@ -4,7 +4,7 @@ import type { Tree } from '@shared/schemas/tree';
 import { Button } from '@/components/ui/button';
 import { Field, controlClass } from '@/components/ui/field';
 import { SelectField } from '@/components/ui/select-field';
-import { speciesOptions, statusOptions } from '@/features/trees/tree-options';
+import { speciesOptions, statusOptions } from '@/lib/tree-options';
 import { isApiError } from '@/lib/api-client';
 import { formatNumber } from '@/lib/units';
 import { mapTreeInputSchema, useCreateTree } from '../api/create-tree';

@@ -1,7 +1,7 @@
 import type { FilterSelectSpec } from '@/components/ui/filter-selects';
 import type { ListPatch } from '@/lib/list-search-params';
 import type { TreeListFilters } from '../api/tree-keys';
-import { speciesFilter, statusFilter } from '../tree-options';
+import { speciesFilter, statusFilter } from '@/lib/tree-options';
 import { ListFilterBar } from './list-filter-bar';
 
 const selects: FilterSelectSpec<TreeListFilters> = { status: statusFilter, species: speciesFilter };

@@ -1,6 +1,6 @@
 import { verdicts, warningCodes, type VerdictKey, type WarningCode } from '@shared/rules/index';
 import type { SelectFilter } from '@/components/ui/select-field';
-import { warningLabel } from '@/lib/warning-labels';
+import { warningLabel } from './warning-labels';
 
 /** Trees by what the advisor says, each verdict with its letter: "T · Tap". */
 export const verdictFilter: SelectFilter<VerdictKey> = {
