@@ -12,7 +12,7 @@ import { parseSeason, seasonParam } from '@/lib/season';
 import { AdviceFigures } from './advice-figures';
 import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
 import { LongRun } from './long-run';
-import { SeasonStepper } from './season-stepper';
+import { SeasonStepper } from '@/components/season-stepper';
 import { ShareProjectionChart } from './share-projection-chart';
 import { TrunkDiagram } from './trunk-diagram';
 import { VerdictBadge } from '@/components/verdict-badge';

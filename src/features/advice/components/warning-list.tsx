@@ -1,6 +1,6 @@
 import type { AdvisorWarning } from '@shared/rules/index';
 import { warningLabel } from '@/lib/warning-labels';
-import { WarningMark } from './warning-chip';
+import { WarningMark } from '@/components/warning-chip';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
 
 /** Each warning: its name, what it means for this tree, and where the rule comes from. */

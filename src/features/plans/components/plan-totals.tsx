@@ -6,7 +6,7 @@ import {
 } from '@shared/rules/index';
 import { cn } from '@/components/ui/cn';
 import { VerdictBadge } from '@/components/verdict-badge';
-import { WarningMark } from '@/features/advice/components/warning-chip';
+import { WarningMark } from '@/components/warning-chip';
 import { warningLabel } from '@/lib/warning-labels';
 import { formatNumber } from '@/lib/units';
 

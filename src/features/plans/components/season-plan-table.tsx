@@ -4,7 +4,7 @@ import { DataTable, type Column, type TableSort } from '@/components/ui/data-tab
 import { paths } from '@/config/paths';
 import { shortPlacements, formatShare } from '@/lib/advice-words';
 import { VerdictBadge } from '@/components/verdict-badge';
-import { WarningChip } from '@/features/advice/components/warning-chip';
+import { WarningChip } from '@/components/warning-chip';
 import { seasonParam } from '@/lib/season';
 import { formatDbh, lengthUnitOf, type UnitSystem } from '@/lib/units';
 

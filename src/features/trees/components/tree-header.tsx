@@ -5,7 +5,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { UnitToggle } from '@/components/ui/unit-toggle';
 import { paths } from '@/config/paths';
 import { formatDate, formatDbh, formatPercent, useUnitSystem } from '@/lib/units';
-import { TreeStatusLabel } from './tree-status';
+import { TreeStatusLabel } from '@/components/tree-status-label';
 
 export function TreeHeader({ tree }: { tree: Tree }) {
   const { unit } = useUnitSystem();

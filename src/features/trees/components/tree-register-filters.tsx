@@ -2,7 +2,7 @@ import type { FilterSelectSpec } from '@/components/ui/filter-selects';
 import type { ListPatch } from '@/lib/list-search-params';
 import type { TreeListFilters } from '../api/tree-keys';
 import { speciesFilter, statusFilter } from '@/lib/tree-options';
-import { ListFilterBar } from './list-filter-bar';
+import { ListFilterBar } from '@/components/ui/list-filter-bar';
 
 const selects: FilterSelectSpec<TreeListFilters> = { status: statusFilter, species: speciesFilter };
 

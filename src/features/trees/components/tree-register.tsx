@@ -10,9 +10,9 @@ import { nextSort, toTableSort } from '@/lib/list-search-params';
 import { formatDate, formatDbh, formatPercent, useUnitSystem, type LengthUnit } from '@/lib/units';
 import { useTrees } from '../api/get-trees';
 import { useRegisterSearchParams } from './register-search-params';
-import { TreeListEmpty } from './tree-list-empty';
+import { TreeListEmpty } from '@/components/tree-list-empty';
 import { TreeRegisterFilters } from './tree-register-filters';
-import { TreeStatusLabel } from './tree-status';
+import { TreeStatusLabel } from '@/components/tree-status-label';
 
 const columns = (unit: LengthUnit): Column<Tree>[] => [
   {
