@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { useMatches, useParams } from 'react-router';
 import type { SectionKey } from '@/config/paths';
-import { useTree } from '@/features/trees/api/get-tree';
+import { useTree } from '@/lib/get-tree';
 import { useMe } from '@/lib/auth';
 import type { SectionHandle } from './sections';
 

@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { useUnitSystem } from '@/lib/units';
-import { useTreeAdvice } from '../api/get-tree-advice';
+import { useTreeAdvice } from '@/lib/get-tree-advice';
 import { adviceSentence, drillWords, spotWords } from '@/lib/advice-words';
 import { parseSeason, seasonParam } from '@/lib/season';
 import { AdviceFigures } from './advice-figures';
