@@ -3,7 +3,7 @@ import { upcomingSeason } from '@shared/schemas/plan';
 import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, page, taphole } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
-import { treeAdvice } from './advice-fixtures';
+import { treeAdvice } from '@/test/advice-fixtures';
 import { AdviceCard } from './components/advice-card';
 import { VerdictBadge } from '@/components/verdict-badge';
 

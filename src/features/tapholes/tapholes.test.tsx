@@ -3,7 +3,7 @@ import type { Role } from '@shared/schemas/enums';
 import { upcomingSeason } from '@shared/schemas/plan';
 import type { TapholeInput } from '@shared/schemas/taphole';
 import { TreeRoute } from '@/app/routes/tree';
-import { standPlan, treeAdvice } from '@/features/advice/advice-fixtures';
+import { standPlan, treeAdvice } from '@/test/advice-fixtures';
 import { queryRoots } from '@/lib/query-roots';
 import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, page, sugarbush, taphole, tree } from '@/test/fixtures';
