@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { MapColumns } from '@shared/schemas/map';
 import type { Tree } from '@shared/schemas/tree';
 import { api } from '@/lib/api-client';
 import { treeDetailKeys } from '@/lib/tree-detail-keys';
 import { treeListKeys } from '@/lib/tree-list-keys';
 import { mapKeys } from './map-keys';
-import type { MapColumns } from '@shared/schemas/map';
 
 export interface MoveTreeInput {
   treeId: number;

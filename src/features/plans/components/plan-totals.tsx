@@ -7,8 +7,8 @@ import {
 import { cn } from '@/components/ui/cn';
 import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningMark } from '@/components/warning-chip';
-import { warningLabel } from '@/lib/warning-labels';
 import { formatNumber } from '@/lib/units';
+import { warningLabel } from '@/lib/warning-labels';
 
 const figures: { key: keyof PlanTotals; label: string; verdict?: VerdictKey }[] = [
   { key: 'treesToTap', label: 'Trees to tap' },
