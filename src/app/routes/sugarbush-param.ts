@@ -1,4 +1,4 @@
-import { useSugarbush } from '@/features/sugarbushes/api/get-sugarbush';
+import { useSugarbush } from '@/lib/get-sugarbush';
 import { useIdParam } from '@/lib/id-param';
 
 /** The sugarbush a page is about, from its `:id`; `sugarbushId` is undefined when that is not an id. */

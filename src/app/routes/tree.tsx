@@ -9,11 +9,11 @@ import { DiameterHistory } from '@/features/measurements/components/diameter-his
 import { MeasurementForm } from '@/features/measurements/components/measurement-form';
 import { TapholeForm, type SpotRequest } from '@/features/tapholes/components/taphole-form';
 import { TapholeList } from '@/features/tapholes/components/taphole-list';
-import { useTree } from '@/features/trees/api/get-tree';
 import { TappingCaution } from '@/features/trees/components/tapping-caution';
 import { TreeHeader } from '@/features/trees/components/tree-header';
 import { isApiError } from '@/lib/api-client';
 import { can, useRole } from '@/lib/auth';
+import { useTree } from '@/lib/get-tree';
 
 export function TreeRoute() {
   const { treeId: param } = useParams();

@@ -1,8 +1,8 @@
 import { useEffect } from 'react';
 import { useMatches, useParams } from 'react-router';
 import type { SectionKey } from '@/config/paths';
-import { useTree } from '@/features/trees/api/get-tree';
 import { useMe } from '@/lib/auth';
+import { useTree } from '@/lib/get-tree';
 import type { SectionHandle } from './sections';
 
 const STORAGE_KEY = 'clearwood.lastSugarbush';

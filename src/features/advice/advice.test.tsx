@@ -1,11 +1,11 @@
 import { render, screen, waitFor, within } from '@testing-library/react';
 import { upcomingSeason } from '@shared/schemas/plan';
+import { VerdictBadge } from '@/components/verdict-badge';
+import { treeAdvice } from '@/test/advice-fixtures';
 import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, page, taphole } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
-import { treeAdvice } from './advice-fixtures';
 import { AdviceCard } from './components/advice-card';
-import { VerdictBadge } from '@/components/verdict-badge';
 
 const ADVICE = 'GET /api/trees/7/advice';
 

@@ -1,7 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { upcomingSeason } from '@shared/schemas/plan';
 import { SeasonPlanRoute } from '@/app/routes/season-plan';
-import { planItem, standPlan } from '@/features/advice/advice-fixtures';
+import { planItem, standPlan } from '@/test/advice-fixtures';
 import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, sugarbush } from '@/test/fixtures';
 import { renderPage } from '@/test/render';

@@ -3,8 +3,8 @@ import type { Role } from '@shared/schemas/enums';
 import { upcomingSeason } from '@shared/schemas/plan';
 import type { TapholeInput } from '@shared/schemas/taphole';
 import { TreeRoute } from '@/app/routes/tree';
-import { standPlan, treeAdvice } from '@/features/advice/advice-fixtures';
-import { planKeys } from '@/features/plans/api/plan-keys';
+import { queryRoots } from '@/lib/query-roots';
+import { standPlan, treeAdvice } from '@/test/advice-fixtures';
 import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, page, sugarbush, taphole, tree } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
@@ -149,7 +149,12 @@ describe('recording a taphole on the tree page', () => {
 
   it('when a hole is saved, then a calm confirmation shows and the record and advice are fetched again', async () => {
     const { api, user, queryClient } = openTreeAs('tapper');
-    const planKey = planKeys.list(3, { season: 2027, page: 1, pageSize: 50, sort: 'tag' });
+    const planKey = [
+      ...queryRoots.plans,
+      'list',
+      3,
+      { season: 2027, page: 1, pageSize: 50, sort: 'tag' },
+    ];
     queryClient.setQueryData(planKey, standPlan([]));
     await openForm();
     await waitFor(() => expect(api.to(TAPHOLES).length).toBeGreaterThan(0));

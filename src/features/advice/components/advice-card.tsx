@@ -2,22 +2,22 @@ import type { ReactNode } from 'react';
 import { useSearchParams } from 'react-router';
 import type { Spot } from '@shared/rules/index';
 import type { TreeAdvice } from '@shared/schemas/plan';
+import { SeasonStepper } from '@/components/season-stepper';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
-import { Skeleton } from '@/components/ui/skeleton';
-import { useUnitSystem } from '@/lib/units';
-import { useTreeAdvice } from '../api/get-tree-advice';
-import { adviceSentence, drillWords, spotWords } from '../advice-words';
-import { parseSeason, seasonParam } from '../season';
-import { AdviceFigures } from './advice-figures';
 import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
+import { Skeleton } from '@/components/ui/skeleton';
+import { WhyDisclosure } from '@/components/ui/why-disclosure';
+import { VerdictBadge } from '@/components/verdict-badge';
+import { adviceSentence, drillWords, spotWords } from '@/lib/advice-words';
+import { useTreeAdvice } from '@/lib/get-tree-advice';
+import { parseSeason, seasonParam } from '@/lib/season';
+import { useUnitSystem } from '@/lib/units';
+import { AdviceFigures } from './advice-figures';
 import { LongRun } from './long-run';
-import { SeasonStepper } from './season-stepper';
 import { ShareProjectionChart } from './share-projection-chart';
 import { TrunkDiagram } from './trunk-diagram';
-import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningList } from './warning-list';
-import { WhyDisclosure } from '@/components/ui/why-disclosure';
 
 /** The season shown is kept in the URL (`?season=`), so a link from the plan opens the same one. */
 function useSeasonSearchParam() {

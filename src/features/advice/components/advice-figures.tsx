@@ -1,8 +1,8 @@
 import { in2ToCm2, publishedGrowth } from '@shared/rules/index';
 import type { TreeAdvice } from '@shared/schemas/plan';
-import { formatNumber, type UnitSystem } from '@/lib/units';
-import { formatShare } from '../advice-words';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
+import { formatShare } from '@/lib/advice-words';
+import { formatNumber, type UnitSystem } from '@/lib/units';
 
 /** Basal-area growth a year, in² or cm². */
 function areaPerYear(in2: number, system: UnitSystem): string {

@@ -1,7 +1,7 @@
 import { LONG_REACH_SEASONS } from '@shared/rules/index';
 import type { TreeAdvice } from '@shared/schemas/plan';
+import { formatShare } from '@/lib/advice-words';
 import { formatNumber } from '@/lib/units';
-import { formatShare } from '../advice-words';
 
 /**
  * Beside the 20-season projection: where the advised rate settles in the long run, and how long

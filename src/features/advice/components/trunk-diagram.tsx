@@ -1,8 +1,8 @@
 import { useId } from 'react';
 import type { Spot } from '@shared/rules/index';
 import type { Taphole } from '@shared/schemas/taphole';
+import { compassWord, formatHeight, spotWords } from '@/lib/advice-words';
 import { cmToIn, type UnitSystem } from '@/lib/units';
-import { compassWord, formatHeight, spotWords } from '../advice-words';
 
 interface Props {
   placements: readonly Spot[];

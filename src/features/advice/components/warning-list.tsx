@@ -1,7 +1,7 @@
 import type { AdvisorWarning } from '@shared/rules/index';
-import { warningLabel } from '../warning-labels';
-import { WarningMark } from './warning-chip';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
+import { WarningMark } from '@/components/warning-chip';
+import { warningLabel } from '@/lib/warning-labels';
 
 /** Each warning: its name, what it means for this tree, and where the rule comes from. */
 export function WarningList({ warnings }: { warnings: AdvisorWarning[] }) {

@@ -3,9 +3,9 @@ import { z } from 'zod';
 import { speciesSchema, treeStatusSchema } from '@shared/schemas/enums';
 import type { Tree } from '@shared/schemas/tree';
 import { treeInputSchema } from '@shared/schemas/tree';
-import { sugarbushKeys } from '@/features/sugarbushes/api/sugarbush-keys';
-import { treeKeys } from '@/features/trees/api/tree-keys';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-roots';
+import { treeListKeys } from '@/lib/tree-list-keys';
 import { mapKeys } from './map-keys';
 
 /** A tree placed on the map: the register's own rules, with a position it must have. */
@@ -28,8 +28,8 @@ export function useCreateTree(sugarbushId: number) {
     onSettled: () =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: mapKeys.all }),
-        queryClient.invalidateQueries({ queryKey: treeKeys.lists() }),
-        queryClient.invalidateQueries({ queryKey: sugarbushKeys.all }),
+        queryClient.invalidateQueries({ queryKey: treeListKeys.all() }),
+        queryClient.invalidateQueries({ queryKey: queryRoots.sugarbushes }),
       ]),
   });
 }

@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { Tree } from '@shared/schemas/tree';
-import { treeKeys } from '@/features/trees/api/tree-keys';
-import { api } from '@/lib/api-client';
-import { mapKeys } from './map-keys';
 import type { MapColumns } from '@shared/schemas/map';
+import type { Tree } from '@shared/schemas/tree';
+import { api } from '@/lib/api-client';
+import { treeDetailKeys } from '@/lib/tree-detail-keys';
+import { treeListKeys } from '@/lib/tree-list-keys';
+import { mapKeys } from './map-keys';
 
 export interface MoveTreeInput {
   treeId: number;
@@ -36,8 +37,8 @@ export function useMoveTree(sugarbushId: number) {
     onSettled: (_tree, _error, { treeId }) =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: mapKeys.all }),
-        queryClient.invalidateQueries({ queryKey: treeKeys.detail(treeId) }),
-        queryClient.invalidateQueries({ queryKey: treeKeys.lists() }),
+        queryClient.invalidateQueries({ queryKey: treeDetailKeys.tree(treeId) }),
+        queryClient.invalidateQueries({ queryKey: treeListKeys.all() }),
       ]),
   });
 }

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Boundary, Sugarbush } from '@shared/schemas/sugarbush';
-import { sugarbushKeys } from '@/features/sugarbushes/api/sugarbush-keys';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-roots';
+import { sugarbushDetailKeys } from '@/lib/sugarbush-detail-keys';
 import { mapKeys } from './map-keys';
 
 export const updateBoundary = (sugarbushId: number, boundary: Boundary | null) =>
@@ -13,11 +14,11 @@ export function useUpdateBoundary(sugarbushId: number) {
   return useMutation({
     mutationFn: (boundary: Boundary | null) => updateBoundary(sugarbushId, boundary),
     onSuccess: (sugarbush) => {
-      queryClient.setQueryData(sugarbushKeys.detail(sugarbushId), sugarbush);
+      queryClient.setQueryData(sugarbushDetailKeys.sugarbush(sugarbushId), sugarbush);
     },
     onSettled: () =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: sugarbushKeys.all }),
+        queryClient.invalidateQueries({ queryKey: queryRoots.sugarbushes }),
         queryClient.invalidateQueries({ queryKey: mapKeys.all }),
       ]),
   });

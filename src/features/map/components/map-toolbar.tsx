@@ -2,8 +2,8 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { FilterSelects, type FilterSelectSpec } from '@/components/ui/filter-selects';
 import { SearchInput } from '@/components/ui/search-input';
-import { verdictFilter, warningFilter } from '@/features/advice/advice-options';
-import { speciesFilter, statusFilter } from '@/features/trees/tree-options';
+import { verdictFilter, warningFilter } from '@/lib/advice-options';
+import { speciesFilter, statusFilter } from '@/lib/tree-options';
 import { formatNumber } from '@/lib/units';
 import type { MapFilters } from '../lib/map-filters';
 

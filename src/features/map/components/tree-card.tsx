@@ -1,10 +1,10 @@
 import { Link } from 'react-router';
 import { speciesLabels } from '@shared/schemas/enums';
+import { TreeStatusLabel } from '@/components/tree-status-label';
 import { Button } from '@/components/ui/button';
-import { paths } from '@/config/paths';
 import { VerdictBadge } from '@/components/verdict-badge';
-import { WarningChip } from '@/features/advice/components/warning-chip';
-import { TreeStatusLabel } from '@/features/trees/components/tree-status';
+import { WarningChip } from '@/components/warning-chip';
+import { paths } from '@/config/paths';
 import type { LengthUnit } from '@/lib/units';
 import { useTreeDetails } from '../api/get-tree-details';
 import type { MapTree } from '../lib/map-stand';

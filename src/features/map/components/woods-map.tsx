@@ -1,7 +1,7 @@
-import { ErrorState } from '@/components/ui/error-state';
 import { AdviceProgress } from '@/components/advice-progress';
+import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
-import { useSugarbush } from '@/features/sugarbushes/api/get-sugarbush';
+import { useSugarbush } from '@/lib/get-sugarbush';
 import { useMapTrees } from '../api/get-map-trees';
 import { MapWorkspace } from './map-workspace';
 

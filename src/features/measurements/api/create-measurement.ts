@@ -5,8 +5,9 @@ import {
   type MeasurementInput,
 } from '@shared/schemas/measurement';
 import { api } from '@/lib/api-client';
-import { treeKeys } from '@/features/trees/api/tree-keys';
-import { planKeys } from '@/features/plans/api/plan-keys';
+import { queryRoots } from '@/lib/query-roots';
+import { treeDetailKeys } from '@/lib/tree-detail-keys';
+import { treeListKeys } from '@/lib/tree-list-keys';
 import { measurementKeys } from './measurement-keys';
 
 export { measurementInputSchema as createMeasurementInputSchema };
@@ -22,10 +23,10 @@ export function useCreateMeasurement(treeId: number) {
       Promise.all([
         queryClient.invalidateQueries({ queryKey: measurementKeys.list(treeId) }),
         // The tree's latest DBH changes, in its header and in every register page.
-        queryClient.invalidateQueries({ queryKey: treeKeys.detail(treeId) }),
-        queryClient.invalidateQueries({ queryKey: treeKeys.lists() }),
+        queryClient.invalidateQueries({ queryKey: treeDetailKeys.tree(treeId) }),
+        queryClient.invalidateQueries({ queryKey: treeListKeys.all() }),
         // A new diameter can change the season plan's verdicts and totals.
-        queryClient.invalidateQueries({ queryKey: planKeys.all }),
+        queryClient.invalidateQueries({ queryKey: queryRoots.plans }),
       ]),
   });
 }

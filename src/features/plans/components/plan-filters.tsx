@@ -1,6 +1,6 @@
 import type { FilterSelectSpec } from '@/components/ui/filter-selects';
-import { verdictFilter, warningFilter } from '@/features/advice/advice-options';
-import { ListFilterBar } from '@/features/trees/components/list-filter-bar';
+import { ListFilterBar } from '@/components/ui/list-filter-bar';
+import { verdictFilter, warningFilter } from '@/lib/advice-options';
 import type { ListPatch } from '@/lib/list-search-params';
 import type { PlanFilters } from '../api/plan-keys';
 

@@ -1,6 +1,6 @@
 import { verdicts, warningCodes, type VerdictKey, type WarningCode } from '@shared/rules/index';
-import { parseSeason, seasonParam } from '@/features/advice/season';
 import { bothWays, oneOf, parseListParams, useListSearchParams } from '@/lib/list-search-params';
+import { parseSeason, seasonParam } from '@/lib/season';
 import { PLAN_PAGE_SIZE } from '../api/get-season-plan';
 import type { PlanFilters, PlanSort } from '../api/plan-keys';
 

@@ -6,9 +6,9 @@ import {
 } from '@shared/rules/index';
 import { cn } from '@/components/ui/cn';
 import { VerdictBadge } from '@/components/verdict-badge';
-import { WarningMark } from '@/features/advice/components/warning-chip';
-import { warningLabel } from '@/features/advice/warning-labels';
+import { WarningMark } from '@/components/warning-chip';
 import { formatNumber } from '@/lib/units';
+import { warningLabel } from '@/lib/warning-labels';
 
 const figures: { key: keyof PlanTotals; label: string; verdict?: VerdictKey }[] = [
   { key: 'treesToTap', label: 'Trees to tap' },

@@ -1,11 +1,11 @@
 import { Link } from 'react-router';
 import type { PlanItem } from '@shared/schemas/plan';
 import { DataTable, type Column, type TableSort } from '@/components/ui/data-table';
-import { paths } from '@/config/paths';
-import { shortPlacements, formatShare } from '@/features/advice/advice-words';
 import { VerdictBadge } from '@/components/verdict-badge';
-import { WarningChip } from '@/features/advice/components/warning-chip';
-import { seasonParam } from '@/features/advice/season';
+import { WarningChip } from '@/components/warning-chip';
+import { paths } from '@/config/paths';
+import { shortPlacements, formatShare } from '@/lib/advice-words';
+import { seasonParam } from '@/lib/season';
 import { formatDbh, lengthUnitOf, type UnitSystem } from '@/lib/units';
 
 /** A warning that says no more than the verdict beside it is left out of the row. */

@@ -1,9 +1,10 @@
 import { queryRoots } from '@/lib/query-roots';
+import { sugarbushDetailKeys } from '@/lib/sugarbush-detail-keys';
 
 export const sugarbushKeys = {
   all: queryRoots.sugarbushes,
   lists: () => [...sugarbushKeys.all, 'list'] as const,
   list: () => [...sugarbushKeys.lists()] as const,
-  details: () => [...sugarbushKeys.all, 'detail'] as const,
-  detail: (id: number) => [...sugarbushKeys.details(), id] as const,
+  details: sugarbushDetailKeys.all,
+  detail: sugarbushDetailKeys.sugarbush,
 };

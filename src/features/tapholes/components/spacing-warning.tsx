@@ -1,5 +1,5 @@
 import type { Spacing } from '@shared/rules/index';
-import { compassWord, formatHeight } from '@/features/advice/advice-words';
+import { compassWord, formatHeight } from '@/lib/advice-words';
 import { formatLength, lengthUnitOf, type UnitSystem } from '@/lib/units';
 import type { CrowdedHole } from '../lib/spacing-check';
 

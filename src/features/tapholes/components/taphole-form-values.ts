@@ -1,7 +1,7 @@
 import { normalizeAzimuth } from '@shared/rules/index';
 import type { Collection } from '@shared/schemas/enums';
 import { tapholeInputSchema, type TapholeInput } from '@shared/schemas/taphole';
-import { formatBitSize } from '@/features/advice/advice-words';
+import { formatBitSize } from '@/lib/advice-words';
 import { nearestPoint, pointDeg, type CompassPoint } from '@/lib/compass';
 import { cmToIn, inToCm, parseDecimal, roundTo, type UnitSystem } from '@/lib/units';
 

@@ -1,12 +1,13 @@
 import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { collections, type Collection } from '@shared/schemas/enums';
-import { Field, controlClass } from '@/components/ui/field';
 import { cn } from '@/components/ui/cn';
-import { compassWord, formatHeight } from '@/features/advice/advice-words';
+import { Field, controlClass } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
+import { compassWord, formatHeight } from '@/lib/advice-words';
 import { isApiError } from '@/lib/api-client';
+import { collectionLabels } from '@/lib/collection-labels';
 import { todayIso, useUnitSystem } from '@/lib/units';
 import { useCreateTaphole } from '../api/create-taphole';
-import { collectionLabels } from '@/lib/collection-labels';
 import { DrillInputs } from './drill-inputs';
 import { HeightInput } from './height-input';
 import { SideInput } from './side-input';
@@ -22,7 +23,6 @@ import {
   type TapholeFormValues,
 } from './taphole-form-values';
 import { useDrillingContext } from './use-drilling-context';
-import { FormFooter } from '@/components/ui/form-footer';
 
 /** An advised spot handed to the form; each new `seq` fills it in again. */
 export interface SpotRequest {

@@ -1,9 +1,9 @@
 import { useSearchParams } from 'react-router';
 import { DEFAULT_BIT_CM, DEFAULT_DEPTH_CM } from '@shared/rules/index';
 import type { Taphole } from '@shared/schemas/taphole';
-import { useTreeAdvice } from '@/features/advice/api/get-tree-advice';
-import { parseSeason } from '@/features/advice/season';
-import { useSugarbush } from '@/features/sugarbushes/api/get-sugarbush';
+import { useSugarbush } from '@/lib/get-sugarbush';
+import { useTreeAdvice } from '@/lib/get-tree-advice';
+import { parseSeason } from '@/lib/season';
 import { useTapholes } from '../api/get-tapholes';
 import { crowdedHoles, spacingRulesFor, type CrowdedHole } from '../lib/spacing-check';
 import {

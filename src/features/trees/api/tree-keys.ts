@@ -1,6 +1,7 @@
 import type { Species, TreeStatus } from '@shared/schemas/enums';
 import { queryRoots } from '@/lib/query-roots';
 import { treeDetailKeys } from '@/lib/tree-detail-keys';
+import { treeListKeys } from '@/lib/tree-list-keys';
 
 export type TreeSort =
   'tag' | '-tag' | 'dbh' | '-dbh' | 'status' | '-status' | 'species' | '-species';
@@ -17,7 +18,7 @@ export interface TreeListFilters {
 
 export const treeKeys = {
   all: queryRoots.trees,
-  lists: () => [...treeKeys.all, 'list'] as const,
+  lists: treeListKeys.all,
   list: (sugarbushId: number, filters: TreeListFilters) =>
     [...treeKeys.lists(), sugarbushId, filters] as const,
   details: treeDetailKeys.all,

@@ -1,11 +1,11 @@
 import { Link } from 'react-router';
 import { speciesLabels } from '@shared/schemas/enums';
 import type { Tree } from '@shared/schemas/tree';
+import { TreeStatusLabel } from '@/components/tree-status-label';
 import { PageHeader } from '@/components/ui/page-header';
 import { UnitToggle } from '@/components/ui/unit-toggle';
 import { paths } from '@/config/paths';
 import { formatDate, formatDbh, formatPercent, useUnitSystem } from '@/lib/units';
-import { TreeStatusLabel } from './tree-status';
 
 export function TreeHeader({ tree }: { tree: Tree }) {
   const { unit } = useUnitSystem();

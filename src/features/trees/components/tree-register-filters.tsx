@@ -1,8 +1,8 @@
 import type { FilterSelectSpec } from '@/components/ui/filter-selects';
+import { ListFilterBar } from '@/components/ui/list-filter-bar';
 import type { ListPatch } from '@/lib/list-search-params';
+import { speciesFilter, statusFilter } from '@/lib/tree-options';
 import type { TreeListFilters } from '../api/tree-keys';
-import { speciesFilter, statusFilter } from '../tree-options';
-import { ListFilterBar } from './list-filter-bar';
 
 const selects: FilterSelectSpec<TreeListFilters> = { status: statusFilter, species: speciesFilter };
 

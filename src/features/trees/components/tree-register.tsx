@@ -1,6 +1,8 @@
 import { Link } from 'react-router';
 import { speciesLabels } from '@shared/schemas/enums';
 import type { Tree } from '@shared/schemas/tree';
+import { TreeListEmpty } from '@/components/tree-list-empty';
+import { TreeStatusLabel } from '@/components/tree-status-label';
 import { DataTable, type Column } from '@/components/ui/data-table';
 import { ErrorState } from '@/components/ui/error-state';
 import { Pager } from '@/components/ui/pager';
@@ -10,9 +12,7 @@ import { nextSort, toTableSort } from '@/lib/list-search-params';
 import { formatDate, formatDbh, formatPercent, useUnitSystem, type LengthUnit } from '@/lib/units';
 import { useTrees } from '../api/get-trees';
 import { useRegisterSearchParams } from './register-search-params';
-import { TreeListEmpty } from './tree-list-empty';
 import { TreeRegisterFilters } from './tree-register-filters';
-import { TreeStatusLabel } from './tree-status';
 
 const columns = (unit: LengthUnit): Column<Tree>[] => [
   {

@@ -1,6 +1,6 @@
 import { useCallback } from 'react';
-import { cn } from '@/components/ui/cn';
-import { FilterSelects, type FilterSelectSpec } from '@/components/ui/filter-selects';
+import { cn } from './cn';
+import { FilterSelects, type FilterSelectSpec } from './filter-selects';
 import { TagSearch } from './tag-search';
 
 /** The row above a list of trees: the tag search, then a select for each of `selects`. */

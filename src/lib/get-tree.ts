@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Tree } from '@shared/schemas/tree';
-import { api } from '@/lib/api-client';
-import { treeKeys } from './tree-keys';
+import { api } from './api-client';
+import { treeDetailKeys } from './tree-detail-keys';
 
 export const getTree = (treeId: number, signal?: AbortSignal) =>
   api.get<Tree>(`/trees/${treeId}`, { signal });
 
 export const treeQueryOptions = (treeId: number) =>
   queryOptions({
-    queryKey: treeKeys.detail(treeId),
+    queryKey: treeDetailKeys.tree(treeId),
     queryFn: ({ signal }) => getTree(treeId, signal),
   });
 

@@ -1,5 +1,5 @@
 import type { Advice } from '@shared/rules/index';
-import { cmToIn, formatNumber, type UnitSystem } from '@/lib/units';
+import { cmToIn, formatNumber, type UnitSystem } from './units';
 
 /**
  * The advisor's figures in the words a tapper reads at the tree: compass sides, heights in

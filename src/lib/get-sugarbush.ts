@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Sugarbush } from '@shared/schemas/sugarbush';
-import { api } from '@/lib/api-client';
-import { sugarbushKeys } from './sugarbush-keys';
+import { api } from './api-client';
+import { sugarbushDetailKeys } from './sugarbush-detail-keys';
 
 export const getSugarbush = (id: number, signal?: AbortSignal) =>
   api.get<Sugarbush>(`/sugarbushes/${id}`, { signal });
 
 export const sugarbushQueryOptions = (id: number) =>
   queryOptions({
-    queryKey: sugarbushKeys.detail(id),
+    queryKey: sugarbushDetailKeys.sugarbush(id),
     queryFn: ({ signal }) => getSugarbush(id, signal),
     staleTime: 5 * 60_000,
   });

@@ -1,5 +1,5 @@
 import { cn } from '@/components/ui/cn';
-import { FIRST_SEASON, lastSeason } from '../season';
+import { FIRST_SEASON, lastSeason } from '@/lib/season';
 
 const stepClass = cn(
   'inline-grid min-h-11 min-w-11 place-items-center text-lg leading-none hover:bg-frost md:min-h-9 md:min-w-9',

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { SearchInput } from '@/components/ui/search-input';
+import { SearchInput } from './search-input';
 
 const DEBOUNCE_MS = 250;
 

@@ -1,6 +1,6 @@
 import type { WarningCode } from '@shared/rules/index';
 import { cn } from '@/components/ui/cn';
-import { warningLabel, warningMarks, warningWeight } from '../warning-labels';
+import { warningLabel, warningMarks, warningWeight } from '@/lib/warning-labels';
 
 /** A warning's short name with its mark: "! Holes too close". */
 export function WarningMark({ code }: { code: WarningCode | string }) {
