@@ -106,6 +106,9 @@ export interface LoadFigures {
   failed: number;
   /** The run was cut short at its time cap. */
   capped: boolean;
+  connections: number;
+  /** One request alone, before the run (null when not probed). */
+  probeMs: number | null;
 }
 
 export interface LoadOptions {
@@ -121,17 +124,21 @@ export interface LoadOptions {
 
 /**
  * An autocannon run of GET requests with the session's cookie. When one request alone already
- * takes long, a fixed number of requests is sent instead of running for `seconds`, so that the
- * slowest answers are counted rather than cut off at the end of the run.
+ * takes more than a twentieth of the run, a fixed number of requests is sent instead of running
+ * for `seconds`, so that the slowest answers are counted rather than cut off at the end; and on
+ * fewer connections when `connections` of them would not be served within `capSeconds`, so that
+ * the server is not left with minutes of queued work after the run.
  */
 export async function load(s: Session, opts: LoadOptions): Promise<LoadFigures> {
   const url = new URL(s.baseUrl);
   if (!['127.0.0.1', 'localhost', '[::1]'].includes(url.hostname))
     throw new Error(`Load runs against this machine only, not ${url.hostname}`);
   let i = 0;
-  const slow = opts.until
-    ? false
-    : (await ok(s, 'GET', opts.paths[0])).ms > (opts.seconds * 1000) / 20;
+  const probeMs = opts.until ? null : (await ok(s, 'GET', opts.paths[0])).ms;
+  const slow = probeMs !== null && probeMs > (opts.seconds * 1000) / 20;
+  const connections = slow
+    ? Math.max(1, Math.min(opts.connections, Math.floor((opts.capSeconds * 1000) / probeMs)))
+    : opts.connections;
   const t0 = performance.now();
   let finish!: (r: autocannon.Result) => void;
   let fail!: (e: unknown) => void;
@@ -142,9 +149,9 @@ export async function load(s: Session, opts: LoadOptions): Promise<LoadFigures> 
   const instance = autocannon(
     {
       url: s.baseUrl,
-      connections: opts.connections,
+      connections,
       ...(slow
-        ? { amount: opts.connections * 2 }
+        ? { amount: connections }
         : { duration: opts.until ? opts.capSeconds : opts.seconds }),
       timeout: REQUEST_TIMEOUT_MS / 1000,
       headers: { cookie: s.cookie },
@@ -175,5 +182,7 @@ export async function load(s: Session, opts: LoadOptions): Promise<LoadFigures> 
     seconds,
     failed: result.non2xx + result.errors + result.timeouts,
     capped: capped && !opts.until,
+    connections,
+    probeMs,
   };
 }

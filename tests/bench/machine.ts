@@ -108,6 +108,7 @@ export function machineInfo(): MachineInfo {
     chromium = execSync(`${process.env.CHROMIUM_PATH ?? '/usr/bin/chromium'} --version`, {
       encoding: 'utf8',
       timeout: 20_000,
+      stdio: ['ignore', 'pipe', 'ignore'],
     }).trim();
   } catch {
     chromium = 'not found';

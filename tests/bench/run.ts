@@ -15,8 +15,8 @@ import type { Browser } from 'playwright-core';
 import { upcomingSeason } from '../../shared/schemas/plan';
 import { launchBrowser } from '../e2e/harness';
 import { bundleFigures, ensureClientBuilt, type BundleFigures } from './bundle';
-import { busyWindow, machineInfo, pct, type BusyWindow } from './machine';
-import { measureMap, type MapFigures } from './map-draw';
+import { busyWindow, machineInfo, pct } from './machine';
+import { measureMap } from './map-draw';
 import { readStand, standSettings, timePlanStand } from './plan-floor';
 import { signIn, ok } from './http';
 import { writeDoc, type StandResult } from './write-doc';
@@ -92,46 +92,62 @@ async function benchStand(trees: number, browser: Browser | null): Promise<Stand
 
     const pages = await pageLoads(s, cached.standId, SEASON, treeIds);
 
-    let map: { best: MapFigures; others: MapFigures[]; busy: BusyWindow } | null = null;
-    if (browser) {
-      const w = busyWindow();
-      const m = await measureMap(
-        browser,
-        server.url,
-        {
-          label: `Bench Stand, ${label}`,
-          sugarbushId: cached.standId,
-          email: BENCH_OWNER.email,
-          trees,
-        },
-        MAP_RUNS,
-      );
-      map = { ...m, busy: w.end() };
-    }
+    const errors: string[] = [];
+    /** A section that fails is reported as failed; the other sections still run. */
+    const attempt = async <T>(what: string, work: () => Promise<T>): Promise<T | null> => {
+      try {
+        return await work();
+      } catch (err) {
+        console.log(`  ${what} failed: ${(err as Error).message}`);
+        errors.push(`${what}: ${(err as Error).message}`);
+        return null;
+      }
+    };
+    for (const p of pages) if (p.error) errors.push(`${p.page}: ${p.error}`);
+
+    const map = !browser
+      ? null
+      : await attempt('the woods map', async () => {
+          const w = busyWindow();
+          const m = await measureMap(
+            browser,
+            server.url,
+            {
+              label: `Bench Stand, ${label}`,
+              sugarbushId: cached.standId,
+              email: BENCH_OWNER.email,
+              trees,
+            },
+            MAP_RUNS,
+          );
+          return { ...m, busy: w.end() };
+        });
 
     const measured = sample
       .filter((t) => t.measurements.length > 0 && t.status !== 'dead')
       .slice(0, MEASURED_TREES)
       .map((t) => ({ id: Number(t.treeId), latestDbhCm: t.measurements.at(-1)!.dbhCm }));
-    const measurementsWindow = busyWindow();
-    const measurements = await afterMeasurements(s, cached.standId, SEASON, measured);
-    const measurementsBusy = measurementsWindow.end();
-    const guidelineWindow = busyWindow();
-    const guideline = await afterGuidelineChange(s, cached.standId, SEASON, OTHER_PROFILE, stored);
-    const guidelineBusy = guidelineWindow.end();
-    console.log(
-      `  one measurement: POST median ${median(measurements.posts).toFixed(1)} ms; guideline change → ${stored ? 'advice current' : 'next plan page'} ${guideline.recomputeMs.toFixed(0)} ms`,
-    );
-    const during = await trivialDuringRecompute(
-      s,
-      cached.standId,
-      SEASON,
-      settings.profile,
-      stored,
-    );
-    console.log(
-      `  trivial route during a whole-stand recompute (${during.recomputeMs.toFixed(0)} ms): p99 ${during.trivial.p99.toFixed(1)} ms, ${during.trivial.requests} requests`,
-    );
+    const measurements = await attempt('recompute after a measurement', async () => {
+      const w = busyWindow();
+      const m = await afterMeasurements(s, cached.standId, SEASON, measured);
+      console.log(`  one measurement: POST median ${median(m.posts).toFixed(1)} ms`);
+      return { ...m, busy: w.end() };
+    });
+    const guideline = await attempt('recompute after a guideline change', async () => {
+      const w = busyWindow();
+      const g = await afterGuidelineChange(s, cached.standId, SEASON, OTHER_PROFILE, stored);
+      console.log(
+        `  guideline change → ${stored ? 'advice current' : 'next plan page'} ${g.recomputeMs.toFixed(0)} ms`,
+      );
+      return { ...g, busy: w.end() };
+    });
+    const during = await attempt('the trivial route during a whole-stand recompute', async () => {
+      const d = await trivialDuringRecompute(s, cached.standId, SEASON, settings.profile, stored);
+      console.log(
+        `  trivial route during a whole-stand recompute (${d.recomputeMs.toFixed(0)} ms): p99 ${d.trivial.p99.toFixed(1)} ms, ${d.trivial.requests} requests`,
+      );
+      return d;
+    });
     return {
       trees,
       label,
@@ -151,9 +167,10 @@ async function benchStand(trees: number, browser: Browser | null): Promise<Stand
       },
       pages,
       map,
-      measurements: { ...measurements, busy: measurementsBusy },
-      guideline: { ...guideline, busy: guidelineBusy },
+      measurements,
+      guideline,
       during,
+      errors,
     };
   } finally {
     await server.stop();

@@ -11,17 +11,22 @@ export const CONNECTIONS = 20;
 const LOAD_SECONDS = Number(process.env.BENCH_LOAD_SECONDS ?? 4);
 const SLOW_CAP_SECONDS = 30;
 const RECOMPUTE_CAP_MS = 240_000;
-const SETTLE_CAP_MS = 120_000;
+const SETTLE_CAP_MS = 180_000;
 export const TRIVIAL = '/api/auth/csrf';
 
-export interface PageFigures {
+export type PageFigures = {
   page: string;
   route: string;
-  figures: LoadFigures;
-  /** The trivial route, measured the same way just before. */
-  floor: LoadFigures;
   busy: BusyWindow;
-}
+} & (
+  | {
+      figures: LoadFigures;
+      /** The trivial route, measured the same way just before. */
+      floor: LoadFigures;
+      error: null;
+    }
+  | { figures: null; floor: null; error: string }
+);
 
 interface AdviceStatus {
   season: number;
@@ -59,7 +64,11 @@ async function settle(s: Session) {
   const until = performance.now() + SETTLE_CAP_MS;
   let quick = 0;
   while (quick < 3 && performance.now() < until) {
-    quick = (await ok(s, 'GET', TRIVIAL)).ms < 25 ? quick + 1 : 0;
+    try {
+      quick = (await ok(s, 'GET', TRIVIAL)).ms < 25 ? quick + 1 : 0;
+    } catch {
+      quick = 0; // still busy past the request's own time-out
+    }
     await new Promise((resolve) => setTimeout(resolve, 20));
   }
 }
@@ -92,25 +101,38 @@ export async function pageLoads(
   for (const [page, route, paths] of pages) {
     await settle(s);
     const window = busyWindow();
-    const floor = await load(s, {
-      connections: CONNECTIONS,
-      seconds: LOAD_SECONDS,
-      capSeconds: SLOW_CAP_SECONDS,
-      paths: [TRIVIAL],
-    });
-    const figures = await load(s, {
-      connections: CONNECTIONS,
-      seconds: LOAD_SECONDS,
-      capSeconds: SLOW_CAP_SECONDS,
-      paths,
-    });
-    out.push({ page, route, figures, floor, busy: window.end() });
-    console.log(
-      `  ${page.padEnd(26)} p50 ${figures.p50.toFixed(1)} ms, p99 ${figures.p99.toFixed(1)} ms, ${figures.rps.toFixed(0)} req/s` +
-        `   (trivial p99 ${floor.p99.toFixed(1)} ms, ${floor.rps.toFixed(0)} req/s)` +
-        (figures.failed ? `, ${figures.failed} failed` : '') +
-        (figures.capped ? ', cut at the time cap' : ''),
-    );
+    try {
+      const floor = await load(s, {
+        connections: CONNECTIONS,
+        seconds: LOAD_SECONDS,
+        capSeconds: SLOW_CAP_SECONDS,
+        paths: [TRIVIAL],
+      });
+      const figures = await load(s, {
+        connections: CONNECTIONS,
+        seconds: LOAD_SECONDS,
+        capSeconds: SLOW_CAP_SECONDS,
+        paths,
+      });
+      out.push({ page, route, figures, floor, busy: window.end(), error: null });
+      console.log(
+        `  ${page.padEnd(26)} p50 ${figures.p50.toFixed(1)} ms, p99 ${figures.p99.toFixed(1)} ms, ${figures.rps.toFixed(0)} req/s` +
+          `   (trivial p99 ${floor.p99.toFixed(1)} ms, ${floor.rps.toFixed(0)} req/s)` +
+          (figures.failed ? `, ${figures.failed} failed` : '') +
+          (figures.capped ? ', cut at the time cap' : '') +
+          (figures.connections < CONNECTIONS ? `, on ${figures.connections} connections` : ''),
+      );
+    } catch (err) {
+      console.log(`  ${page}: failed (${(err as Error).message})`);
+      out.push({
+        page,
+        route,
+        figures: null,
+        floor: null,
+        busy: window.end(),
+        error: (err as Error).message,
+      });
+    }
   }
   return out;
 }

@@ -35,9 +35,11 @@ export interface StandResult {
   };
   pages: PageFigures[];
   map: { best: MapFigures; others: MapFigures[]; busy: BusyWindow } | null;
-  measurements: MeasurementFigures & { busy: BusyWindow };
-  guideline: GuidelineFigures & { busy: BusyWindow };
-  during: UnderRecompute;
+  measurements: (MeasurementFigures & { busy: BusyWindow }) | null;
+  guideline: (GuidelineFigures & { busy: BusyWindow }) | null;
+  during: UnderRecompute | null;
+  /** Sections that failed, with the reason; their figures are missing. */
+  errors: string[];
 }
 
 export interface RunFigures {
@@ -72,7 +74,14 @@ const median = (xs: readonly number[]) => {
 const others = (w: BusyWindow) => pct(w.others);
 const times = (n: number) => `${fmt(n, n < 10 ? 1 : 0)}×`;
 const load = (f: LoadFigures) =>
-  f.failed ? ` (${f.failed} failed)` : f.capped ? ' (cut at the cap)' : '';
+  (f.connections < CONNECTIONS
+    ? ` (on ${f.connections} connection${f.connections > 1 ? 's' : ''}: one request alone took ${ms(f.probeMs ?? NaN)})`
+    : '') + (f.failed ? ` (${f.failed} failed)` : f.capped ? ' (cut at the cap)' : '');
+const failed = (what: string): Verdict => ({
+  what,
+  met: false,
+  text: 'missed (no figure: the run failed)',
+});
 
 export function writeDoc(run: RunFigures): string {
   const r = new Report();
@@ -87,36 +96,23 @@ export function writeDoc(run: RunFigures): string {
   const verdicts: Verdict[] = [];
   if (largest) {
     for (const p of largest.pages) {
-      verdicts.push(
-        under(
-          `${p.page}: p99 at ${CONNECTIONS} connections, ${largest.label}`,
-          p.figures.p99,
-          TARGETS.pageP99Ms,
-        ),
-      );
-      verdicts.push(
-        under(
-          `${p.page}: p99 against the trivial route, ${largest.label}`,
-          p.figures.p99 / p.floor.p99,
-          TARGETS.pageRatio,
-          times,
-          'ratio',
-        ),
-      );
+      const what = `${p.page}: p99 at ${CONNECTIONS} connections, ${largest.label}`;
+      const against = `${p.page}: p99 against the trivial route, ${largest.label}`;
+      if (!p.figures) {
+        verdicts.push(failed(what), failed(against));
+        continue;
+      }
+      verdicts.push(under(what, p.figures.p99, TARGETS.pageP99Ms));
+      verdicts.push(under(against, p.figures.p99 / p.floor.p99, TARGETS.pageRatio, times, 'ratio'));
     }
+    const m = largest.measurements;
+    const oneTree = `one-tree recompute: measurement POST end to end (median of ${m?.posts.length ?? 0}), ${largest.label}`;
+    verdicts.push(m ? under(oneTree, median(m.posts), TARGETS.oneTreeMs) : failed(oneTree));
+    const during = `trivial route p99 during a whole-stand recompute, ${largest.label}`;
     verdicts.push(
-      under(
-        `one-tree recompute: measurement POST end to end (median of ${largest.measurements.posts.length}), ${largest.label}`,
-        median(largest.measurements.posts),
-        TARGETS.oneTreeMs,
-      ),
-    );
-    verdicts.push(
-      under(
-        `trivial route p99 during a whole-stand recompute, ${largest.label}`,
-        largest.during.trivial.p99,
-        TARGETS.duringRecomputeP99Ms,
-      ),
+      largest.during
+        ? under(during, largest.during.trivial.p99, TARGETS.duringRecomputeP99Ms)
+        : failed(during),
     );
   }
   for (const s of run.stands) {
@@ -194,24 +190,28 @@ export function writeDoc(run: RunFigures): string {
       'others used',
     ],
     run.stands.flatMap((s) =>
-      s.pages.map((p) => [
-        s.label,
-        `${p.page}${load(p.figures)}`,
-        ms(p.figures.p50),
-        ms(p.figures.p99),
-        fmt(p.figures.rps, 0),
-        ms(p.floor.p50),
-        ms(p.floor.p99),
-        fmt(p.floor.rps, 0),
-        ratio(p.figures.p99, p.floor.p99),
-        others(p.busy),
-      ]),
+      s.pages.map((p) =>
+        p.figures
+          ? [
+              s.label,
+              `${p.page}${load(p.figures)}`,
+              ms(p.figures.p50),
+              ms(p.figures.p99),
+              fmt(p.figures.rps, 0),
+              ms(p.floor.p50),
+              ms(p.floor.p99),
+              fmt(p.floor.rps, 0),
+              ratio(p.figures.p99, p.floor.p99),
+              others(p.busy),
+            ]
+          : [s.label, `${p.page} (failed: ${p.error})`, '', '', '', '', '', '', '', others(p.busy)],
+      ),
     ),
   );
 
   r.heading('Recompute, beside a single-thread planStand of the whole stand');
   r.para(
-    `The floor is the pure advisor (\`planStand\` from \`shared/rules\`) over the whole stand on one thread in the benchmark's own process, with the record already in memory (reading it straight from the file took ${run.stands.map((s) => `${ms(s.floor.readMs)} at ${s.label}`).join(', ')}). A measurement is a plausible autumn reading on ${run.stands[0]?.measurements.posts.length ?? 0} trees in turn; the guideline change is \`PATCH /api/sugarbushes/:id { profile }\`, then ${stored ? 'polling advice-status until current' : 'the next plan page (before stored advice, the next plan request does the work)'}.\n`,
+    `The floor is the pure advisor (\`planStand\` from \`shared/rules\`) over the whole stand on one thread in the benchmark's own process, with the record already in memory (reading it straight from the file took ${run.stands.map((s) => `${ms(s.floor.readMs)} at ${s.label}`).join(', ')}). A measurement is a plausible autumn reading on ${run.stands[0]?.measurements?.posts.length ?? 0} trees in turn; the guideline change is \`PATCH /api/sugarbushes/:id { profile }\`, then ${stored ? 'polling advice-status until current' : 'the next plan page (before stored advice, the next plan request does the work)'}.\n`,
   );
   r.table(
     ['stand', 'what', 'time', 'planStand', '÷ planStand', 'others used'],
@@ -220,55 +220,67 @@ export function writeDoc(run: RunFigures): string {
       const g = s.guideline;
       const floor = s.floor.planMs;
       const other = s.floor.planOtherMs;
+      const rows: string[][] = [];
+      if (!m) rows.push([s.label, 'after a measurement (failed)', '', ms(floor), '', '']);
+      if (!g) rows.push([s.label, 'after a guideline change (failed)', '', ms(other), '', '']);
       return [
-        [
-          s.label,
-          `measurement POST, median (max ${ms(Math.max(...m.posts))})`,
-          ms(median(m.posts)),
-          ms(floor),
-          ratio(median(m.posts), floor),
-          others(m.busy),
-        ],
-        [
-          s.label,
-          `then the tree's advice, median (max ${ms(Math.max(...m.adviceReads))})`,
-          ms(median(m.adviceReads)),
-          ms(floor),
-          ratio(median(m.adviceReads), floor),
-          others(m.busy),
-        ],
-        [
-          s.label,
-          'then a plan page',
-          ms(m.planAfter),
-          ms(floor),
-          ratio(m.planAfter, floor),
-          others(m.busy),
-        ],
-        [
-          s.label,
-          `guideline → ${s.floor.otherProfile}: the PATCH`,
-          ms(g.patchMs),
-          ms(other),
-          ratio(g.patchMs, other),
-          others(g.busy),
-        ],
-        [
-          s.label,
-          g.stored ? 'PATCH sent → advice current' : 'PATCH sent → next plan page answered',
-          ms(g.recomputeMs),
-          ms(other),
-          ratio(g.recomputeMs, other),
-          others(g.busy),
-        ],
-        [
-          s.label,
-          'then a plan page',
-          ms(g.planAfterMs),
-          ms(other),
-          ratio(g.planAfterMs, other),
-          others(g.busy),
-        ],
+        ...rows,
+        ...(m
+          ? [
+              [
+                s.label,
+                `measurement POST, median (max ${ms(Math.max(...m.posts))})`,
+                ms(median(m.posts)),
+                ms(floor),
+                ratio(median(m.posts), floor),
+                others(m.busy),
+              ],
+              [
+                s.label,
+                `then the tree's advice, median (max ${ms(Math.max(...m.adviceReads))})`,
+                ms(median(m.adviceReads)),
+                ms(floor),
+                ratio(median(m.adviceReads), floor),
+                others(m.busy),
+              ],
+              [
+                s.label,
+                'then a plan page',
+                ms(m.planAfter),
+                ms(floor),
+                ratio(m.planAfter, floor),
+                others(m.busy),
+              ],
+            ]
+          : []),
+        ...(g
+          ? [
+              [
+                s.label,
+                `guideline → ${s.floor.otherProfile}: the PATCH`,
+                ms(g.patchMs),
+                ms(other),
+                ratio(g.patchMs, other),
+                others(g.busy),
+              ],
+              [
+                s.label,
+                g.stored ? 'PATCH sent → advice current' : 'PATCH sent → next plan page answered',
+                ms(g.recomputeMs),
+                ms(other),
+                ratio(g.recomputeMs, other),
+                others(g.busy),
+              ],
+              [
+                s.label,
+                'then a plan page',
+                ms(g.planAfterMs),
+                ms(other),
+                ratio(g.planAfterMs, other),
+                others(g.busy),
+              ],
+            ]
+          : []),
       ];
     }),
   );
@@ -290,7 +302,8 @@ export function writeDoc(run: RunFigures): string {
       'others used',
     ],
     run.stands.map((s) => {
-      const idle = s.pages[0]?.floor;
+      const idle = s.pages.find((p) => p.floor)?.floor;
+      if (!s.during) return [s.label, 'failed', '', '', '', '', '', '', ''];
       const t = s.during.trivial;
       return [
         s.label,
@@ -347,6 +360,12 @@ export function writeDoc(run: RunFigures): string {
         ];
       }),
     );
+  }
+
+  const errors = run.stands.flatMap((s) => s.errors.map((e) => `- ${s.label}: ${e}`));
+  if (errors.length) {
+    r.heading('Sections that failed');
+    r.para(errors.join('\n'));
   }
 
   r.heading('Client bundle');
