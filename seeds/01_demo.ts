@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { copyLatestMeasurements } from '../server/modules/advice/refresh-trees';
 import { hashPassword } from '../server/modules/auth/password';
 import { buildDemo } from './demo/demo';
 import { DEMO_PASSWORD, DEMO_USERS } from './demo/people';
@@ -16,5 +17,10 @@ export { DEMO_SEED } from './demo/random';
 export async function seed(knex: Knex): Promise<void> {
   const stands = buildDemo();
   const hashes = await Promise.all(DEMO_USERS.map(() => hashPassword(DEMO_PASSWORD)));
-  await knex.transaction((trx) => writeDemo(trx, stands, hashes));
+  await knex.transaction(async (trx) => {
+    await writeDemo(trx, stands, hashes);
+    // Written in bulk: the register's latest measurements follow; advice is made on first read.
+    for (const { id } of await trx('sugarbushes').select('id'))
+      await copyLatestMeasurements(trx, { sugarbushId: id });
+  });
 }

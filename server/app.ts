@@ -12,6 +12,7 @@ import type { Knex } from 'knex';
 import type { Config } from './config';
 import type { AppContext } from './context';
 import { createBackground } from './lib/background';
+import { createAdviceJobs } from './modules/advice/advice-jobs';
 import { anonymousCsrfId } from './lib/anonymous-id';
 import { consoleLogger, type Logger } from './lib/logger';
 import { createMailer, type Mailer } from './mail/mailer';
@@ -43,6 +44,7 @@ export function createApp(opts: AppOptions) {
     log,
     mailer: opts.mailer ?? createMailer(config, db, log),
     background: createBackground(log),
+    advice: createAdviceJobs({ db, databaseFile: config.DATABASE_FILE, log }),
   };
   const production = config.NODE_ENV === 'production';
   const app = express();

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import type { AdviceJobs } from './modules/advice/advice-jobs';
 import type { Config } from './config';
 import type { Background } from './lib/background';
 import type { Logger } from './lib/logger';
@@ -11,4 +12,6 @@ export interface AppContext {
   mailer: Mailer;
   log: Logger;
   background: Background;
+  /** Whole-stand advice in worker threads. */
+  advice: AdviceJobs;
 }

@@ -23,6 +23,7 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const close = async () => {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await app.ctx.background.idle();
+    await app.ctx.advice.close();
     await db.destroy();
   };
   return { config, db, server, url, close, ctx: app.ctx };

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { AppContext } from './context';
 import { requireAuth } from './middleware/auth';
+import { adviceRoutes } from './modules/advice/advice.routes';
 import { basemapsRoutes } from './modules/basemaps/basemaps.routes';
 import { invitationsRoutes } from './modules/invitations/invitations.routes';
 import { membersRoutes } from './modules/members/members.routes';
@@ -22,6 +23,7 @@ export function apiRoutes(ctx: AppContext) {
   router.use(tapholesRoutes(ctx));
   router.use(notesRoutes(ctx));
   router.use(plansRoutes(ctx));
+  router.use(adviceRoutes(ctx));
   router.use(mapRoutes(ctx));
   router.use(basemapsRoutes(ctx));
   router.use(membersRoutes(ctx));

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { makeTestApp, signIn, standWithTeam } from './test-app';
+import { makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
@@ -107,6 +107,7 @@ describe('saving a custom guideline profile', () => {
       { tree_id: team.treeId, measured_on: '2024-10-01', season: 2024, dbh_cm: 50 },
       { tree_id: team.treeId, measured_on: '2025-10-01', season: 2025, dbh_cm: 50.6 },
     ]);
+    await recordsWritten(t.db, team.standId, [team.treeId]);
     const res = await save({ ...sane, heightBand: { minCm: 40, maxCm: 120 } });
     expect(res.status).toBe(200);
     const advice = await owner.agent.get(`/api/trees/${team.treeId}/advice?season=2027`);

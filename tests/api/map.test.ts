@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PROBLEM_TAGS } from '../../seeds/01_demo';
 import { seedDemoIfEmpty } from '../../server/scripts/seed-demo';
 import { upcomingSeason } from '../../shared/schemas/plan';
-import { addTree, makeTestApp, signIn, standWithTeam } from './test-app';
+import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 /** Degrees of arc for metres on turf's sphere (R = 6 371 008.8 m). */
 const deg = (m: number) => m / ((6_371_008.8 * Math.PI) / 180);
@@ -47,6 +47,7 @@ beforeAll(async () => {
       { tree_id: ids[tag], measured_on: '2025-10-01', season: 2025, dbh_cm: 35.2 },
       { tree_id: ids[tag], measured_on: '2026-10-01', season: 2026, dbh_cm: 36 },
     ]);
+    await recordsWritten(t.db, team.standId, [ids[tag]]);
   }
   owner = await signIn(t.app, team.users.owner);
   tapper = await signIn(t.app, team.users.tapper);

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { addTree, makeTestApp, signIn, standWithTeam } from './test-app';
+import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
@@ -22,6 +22,7 @@ async function treeMeasured(tag: string, readings: [string, number][]) {
       dbh_cm: dbhCm,
     })),
   );
+  await recordsWritten(t.db, team.standId, [treeId]);
   return treeId;
 }
 

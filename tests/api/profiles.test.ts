@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { makeTestApp, signIn, standWithTeam } from './test-app';
+import { makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
@@ -16,6 +16,7 @@ beforeAll(async () => {
     { tree_id: team.treeId, measured_on: '2024-10-01', season: 2024, dbh_cm: 39.2 },
     { tree_id: team.treeId, measured_on: '2025-10-01', season: 2025, dbh_cm: 40 },
   ]);
+  await recordsWritten(t.db, team.standId, [team.treeId]);
 });
 afterAll(() => t.close());
 

@@ -1,6 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as moveToRuleInForce from '../../migrations/20261202140100_quebec_public_rule_in_force';
-import { addSugarbush, addTree, makeTestApp, signIn, standWithTeam } from './test-app';
+import {
+  addSugarbush,
+  addTree,
+  makeTestApp,
+  recordsWritten,
+  signIn,
+  standWithTeam,
+} from './test-app';
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
@@ -22,6 +29,7 @@ beforeAll(async () => {
     { tree_id: treeId, measured_on: '2024-10-01', season: 2024, dbh_cm: 59.2 },
     { tree_id: treeId, measured_on: '2025-10-01', season: 2025, dbh_cm: 60 },
   ]);
+  await recordsWritten(t.db, team.standId, [treeId]);
 });
 afterAll(() => t.close());
 

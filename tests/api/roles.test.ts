@@ -73,6 +73,12 @@ const cases: RouteCase[] = [
     okStatus: 200,
   },
   {
+    name: 'read whether the advice is current',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/advice-status`,
+    allowed: everyone,
+  },
+  {
     name: 'list the team',
     method: 'get',
     path: (i) => `/api/sugarbushes/${i.standId}/members`,

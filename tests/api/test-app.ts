@@ -6,6 +6,7 @@ import type { Knex } from 'knex';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { quietLogger } from '../../server/lib/logger';
+import { refreshTrees } from '../../server/modules/advice/refresh-trees';
 import { createDb, migrateLatest } from '../../server/db';
 import { hashPassword } from '../../server/modules/auth/password';
 import type { Role } from '../../shared/schemas/enums';
@@ -26,7 +27,12 @@ export async function makeTestApp(env: Record<string, string> = {}, file?: strin
   const db = createDb(dbFile);
   await migrateLatest(db);
   const app = createApp({ config, db, clientDir: null, log: quietLogger });
-  return { app, db, config, dbFile, ctx: app.ctx, close: () => db.destroy() };
+  const close = async () => {
+    await app.ctx.background.idle();
+    await app.ctx.advice.close();
+    await db.destroy();
+  };
+  return { app, db, config, dbFile, ctx: app.ctx, close };
 }
 
 let hashed: string | undefined;
@@ -116,4 +122,14 @@ export function linkToken(text: string, path: string): string {
   const match = new RegExp(`${escaped}(?:\\?token=|/)([\\w-]+)`).exec(text);
   if (!match) throw new Error(`no ${path} link in: ${text}`);
   return match[1];
+}
+
+/**
+ * After a test writes records straight into the database (as a bulk import would), bring the
+ * trees' versions, latest measurements and stored advice up to date, as the services do.
+ */
+export async function recordsWritten(db: Knex, sugarbushId: number, treeIds?: number[]) {
+  const ids =
+    treeIds ?? (await db('trees').where({ sugarbush_id: sugarbushId }).pluck('id')).map(Number);
+  await db.transaction((trx) => refreshTrees(trx, sugarbushId, ids));
 }

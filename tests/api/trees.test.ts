@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { addTree, makeTestApp, signIn, standWithTeam } from './test-app';
+import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
@@ -19,6 +19,7 @@ beforeAll(async () => {
       { tree_id: id, measured_on: '2025-10-01', season: 2025, dbh_cm: 20 + i },
     ]);
   }
+  await recordsWritten(t.db, team.standId);
   tapper = await signIn(t.app, team.users.tapper);
 });
 afterAll(() => t.close());

@@ -1,5 +1,4 @@
 import type { Knex } from 'knex';
-import { standChanged } from '../../lib/stand-changes';
 
 export interface AuditEvent {
   sugarbushId: number | null;
@@ -13,7 +12,6 @@ export interface AuditEvent {
 export function auditRepository(db: Knex) {
   return {
     record: (e: AuditEvent) => {
-      if (e.sugarbushId) standChanged(db, e.sugarbushId);
       return db('audit_events').insert({
         sugarbush_id: e.sugarbushId,
         user_id: e.userId,

@@ -6,10 +6,10 @@ import type { Measurement, MeasurementInput } from '../../../shared/schemas/meas
 import { measurementsRepository } from './measurements.repository';
 import { checkNewReading, readingQuestion, seasonOf } from '../../../shared/rules/index';
 import { pageOf } from '../../lib/paging';
+import { refreshTrees } from '../advice/refresh-trees';
 
 export function measurementsService(ctx: AppContext) {
   const repo = measurementsRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
 
   return {
     async list(treeId: number, q: ListQuery): Promise<Page<Measurement>> {
@@ -49,14 +49,22 @@ export function measurementsService(ctx: AppContext) {
           confirmedOutlier: sentence,
         });
       }
-      const id = await repo.create(treeId, userId, { ...input, confirmedOutlier: check !== null });
-      await audit.record({
-        sugarbushId,
-        userId,
-        action: input.correctsId ? 'correct' : 'create',
-        entity: 'measurement',
-        entityId: id,
-        detail: input,
+      // The row, its audit entry and the tree's advice change together.
+      const id = await ctx.db.transaction(async (trx) => {
+        const newId = await measurementsRepository(trx).create(treeId, userId, {
+          ...input,
+          confirmedOutlier: check !== null,
+        });
+        await auditRepository(trx).record({
+          sugarbushId,
+          userId,
+          action: input.correctsId ? 'correct' : 'create',
+          entity: 'measurement',
+          entityId: newId,
+          detail: input,
+        });
+        await refreshTrees(trx, sugarbushId, [treeId]);
+        return newId;
       });
       return (await repo.find(id))!;
     },

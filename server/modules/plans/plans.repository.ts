@@ -1,28 +1,35 @@
 import type { Knex } from 'knex';
 import type { StandTree } from '../../../shared/rules/index';
 
-/** Trees with their standing record — measurements no later row corrects, and every taphole. */
+export type RecordedTree = StandTree & { id: number; tag: string; recordVersion: number };
+
+/**
+ * Trees with their standing record — measurements no later row corrects, and every taphole — and
+ * the record's version: the whole stand, one tree, or the trees of a list of ids.
+ */
 export async function loadStandTrees(
   db: Knex,
   sugarbushId: number,
-  treeId?: number,
-): Promise<(StandTree & { id: number; tag: string })[]> {
+  only?: number | readonly number[],
+): Promise<RecordedTree[]> {
+  const some = only === undefined ? null : typeof only === 'number' ? [only] : [...only];
   const trees: {
     id: number;
     tag: string;
     species: StandTree['species'];
     status: StandTree['status'];
+    record_version: number;
   }[] = await db('trees')
     .where({ sugarbush_id: sugarbushId })
     .modify((q) => {
-      if (treeId) q.where({ id: treeId });
+      if (some) q.whereIn('id', some);
     })
     .orderBy('tag')
-    .select('id', 'tag', 'species', 'status');
+    .select('id', 'tag', 'species', 'status', 'record_version');
   const ids = trees.map((t) => t.id);
   const scope = (table: string, alias: string) =>
-    treeId
-      ? db(`${table} as ${alias}`).where(`${alias}.tree_id`, treeId)
+    some
+      ? db(`${table} as ${alias}`).whereIn(`${alias}.tree_id`, some)
       : db(`${table} as ${alias}`)
           .join('trees as t', 't.id', `${alias}.tree_id`)
           .where('t.sugarbush_id', sugarbushId);
@@ -45,9 +52,7 @@ export async function loadStandTrees(
 
   const byId = new Map<
     number,
-    StandTree & {
-      id: number;
-      tag: string;
+    RecordedTree & {
       measurements: StandTree['measurements'][number][];
       tapholes: StandTree['tapholes'][number][];
     }
@@ -58,6 +63,7 @@ export async function loadStandTrees(
       tag: t.tag,
       species: t.species,
       status: t.status,
+      recordVersion: Number(t.record_version),
       measurements: [],
       tapholes: [],
     });

@@ -1,12 +1,6 @@
 import type { AppContext } from '../../context';
 import { AppError } from '../../errors';
-import {
-  adviseTree,
-  planStand,
-  resolveProfile,
-  validateCustomProfile,
-  type GuidelineProfile,
-} from '../../../shared/rules/index';
+import { adviseTree, type GuidelineProfile, type PlanTotals } from '../../../shared/rules/index';
 import {
   upcomingSeason,
   type PlanItem,
@@ -19,9 +13,10 @@ import type {
   GuidelinePreview,
   GuidelinePreviewInput,
 } from '../../../shared/schemas/guideline-preview';
-import { shared, standVersion } from '../../lib/stand-changes';
 import { profileColumns } from '../sugarbushes/profile-choice';
 import { diffPlans } from './plan-diff';
+import { adviceRepository } from '../advice/advice.repository';
+import { profileOf } from '../advice/stand-guideline';
 import { loadStandTrees } from './plans.repository';
 
 const summary = (p: GuidelineProfile, notice: string | null): ProfileSummary => ({
@@ -38,18 +33,8 @@ const summary = (p: GuidelineProfile, notice: string | null): ProfileSummary => 
   notice,
 });
 
-/** Trees the advisor does not tap have no meaningful share: they sort after every tapped one. */
-const untappable = new Set(['too-small', 'retired', 'unmeasured']);
-
-const sorters: Record<string, (a: PlanItem, b: PlanItem) => number> = {
-  tag: (a, b) => a.tag.localeCompare(b.tag),
-  taps: (a, b) => a.taps - b.taps,
-  dbh: (a, b) => (a.dbhCm ?? -1) - (b.dbhCm ?? -1),
-  share: (a, b) => a.conductiveShare - b.conductiveShare,
-  verdict: (a, b) => a.verdict.localeCompare(b.verdict),
-};
-
 export function plansService(ctx: AppContext) {
+  const store = adviceRepository(ctx.db);
   async function standRow(sugarbushId: number) {
     const row = await ctx
       .db('sugarbushes')
@@ -73,14 +58,27 @@ export function plansService(ctx: AppContext) {
     };
   }
 
-  /** The whole stand's plan; concurrent requests on the same record share one computation. */
-  function wholePlan(sugarbushId: number, season: number) {
-    const key = `plan:${sugarbushId}:${season}:${standVersion(ctx.db, sugarbushId)}`;
-    return shared(ctx.db, key, async () => {
-      const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
-      const trees = await loadStandTrees(ctx.db, sugarbushId);
-      return { profile, notice, plan: planStand(trees, { season, profile, sunnyAzimuthDeg }) };
-    });
+  /** Totals change only with the stand's record or guideline: kept per change counter. */
+  const totalsCache = new Map<string, Promise<PlanTotals>>();
+  async function totalsFor(sugarbushId: number, season: number, version: number) {
+    const seq = await ctx.db('sugarbushes').where({ id: sugarbushId }).first('record_seq');
+    const key = `${sugarbushId}:${season}:${version}:${seq?.record_seq}`;
+    let totals = totalsCache.get(key);
+    if (!totals) {
+      totals = store.totals(sugarbushId, season, version);
+      totalsCache.set(key, totals);
+      totals.catch(() => totalsCache.delete(key));
+      while (totalsCache.size > 64) totalsCache.delete(totalsCache.keys().next().value!);
+    }
+    return totals;
+  }
+
+  async function complete(sugarbushId: number, season: number, version: number) {
+    const [totals, [{ n }]] = await Promise.all([
+      totalsFor(sugarbushId, season, version),
+      ctx.db('trees').where({ sugarbush_id: sugarbushId }).count({ n: '*' }),
+    ]);
+    return totals.trees === Number(n);
   }
 
   return {
@@ -115,59 +113,61 @@ export function plansService(ctx: AppContext) {
         input.profile,
         (columns.custom_profile as string | undefined) ?? row.custom_profile,
       );
-      const { profile: current, plan: before } = await wholePlan(sugarbushId, season);
-      const trees = await loadStandTrees(ctx.db, sugarbushId);
-      const after = planStand(trees, {
-        season,
-        profile: target,
-        sunnyAzimuthDeg: row.sunny_azimuth_deg,
-      });
+      const current = profileOf(row.profile, row.custom_profile);
+      const version = await ctx.advice.ensure(sugarbushId, season);
+      const [before, after] = await Promise.all([
+        store.all(sugarbushId, season, version),
+        ctx.advice.planWith(sugarbushId, season, {
+          profile: input.profile,
+          customJson: (columns.custom_profile as string | undefined) ?? row.custom_profile,
+        }),
+      ]);
       return diffPlans(
-        { plan: before, label: current.label },
-        { plan: after, label: target.label },
+        {
+          label: current.label,
+          profile: current.key,
+          items: before.map((r) => ({
+            treeId: r.id,
+            tag: r.tag,
+            taps: r.taps,
+            verdict: r.verdict,
+            dbhCm: r.dbh_cm,
+          })),
+        },
+        { label: target.label, profile: target.key, items: after },
+        season,
       );
     },
 
     async planForStand(sugarbushId: number, q: PlanQuery): Promise<StandPlanResponse> {
       const season = q.season ?? upcomingSeason();
-      const { profile, notice, plan } = await wholePlan(sugarbushId, season);
-      let items = plan.items as PlanItem[];
-      if (q.q) items = items.filter((i) => i.tag.toLowerCase().includes(q.q!.toLowerCase()));
-      if (q.verdict) items = items.filter((i) => i.verdict === q.verdict);
-      if (q.warning) items = items.filter((i) => i.warnings.some((w) => w.code === q.warning));
-      if (q.sort) {
-        const key = q.sort.replace(/^-/, '');
-        const sign = q.sort.startsWith('-') ? -1 : 1;
-        items = [...items].sort((a, b) => {
-          if (key === 'share' && untappable.has(a.verdict) !== untappable.has(b.verdict)) {
-            return untappable.has(a.verdict) ? 1 : -1;
-          }
-          return sign * sorters[key](a, b) || a.tag.localeCompare(b.tag);
-        });
-      }
-      const start = (q.page - 1) * q.pageSize;
+      const { profile, notice } = await standSettings(sugarbushId);
+      let version = await ctx.advice.ensure(sugarbushId, season);
+      // Every tree must have a current row; a write that went around the services shows here.
+      if (!(await complete(sugarbushId, season, version)))
+        version = await ctx.advice.ensure(sugarbushId, season, { recheck: true });
+      const [page, totals] = await Promise.all([
+        store.page(sugarbushId, season, version, {
+          q: q.q,
+          verdict: q.verdict,
+          warning: q.warning,
+          sort: q.sort,
+          offset: (q.page - 1) * q.pageSize,
+          limit: q.pageSize,
+        }),
+        totalsFor(sugarbushId, season, version),
+      ]);
       return {
         season,
         profile: summary(profile, notice),
-        totals: plan.totals,
-        items: items.slice(start, start + q.pageSize),
-        total: items.length,
+        totals,
+        items: page.items.map(
+          (i) => ({ ...JSON.parse(i.payload), treeId: i.treeId, tag: i.tag }) as PlanItem,
+        ),
+        total: page.total,
         page: q.page,
         pageSize: q.pageSize,
       };
     },
   };
-}
-
-/** The guideline a stand's columns name; a saved custom set that no longer passes is a 409. */
-function profileOf(key: string, customJson: string | null): GuidelineProfile {
-  if (key !== 'custom') return resolveProfile(key);
-  const result = validateCustomProfile(customJson ? JSON.parse(customJson) : null);
-  if (!result.ok)
-    throw new AppError(
-      409,
-      'profile-invalid',
-      'The saved custom profile is not valid: fix it in Settings',
-    );
-  return result.profile;
 }

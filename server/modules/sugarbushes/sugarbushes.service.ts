@@ -5,6 +5,7 @@ import { auditRepository } from '../audit/audit.repository';
 import { membersRepository } from '../members/members.repository';
 import type { ListQuery, Page } from '../../../shared/schemas/list-query';
 import type { Sugarbush } from '../../../shared/schemas/sugarbush';
+import { guidelineChanged } from '../advice/refresh-trees';
 import { profileColumns } from './profile-choice';
 import { sugarbushesRepository } from './sugarbushes.repository';
 import type { z } from 'zod';
@@ -59,14 +60,20 @@ export function sugarbushesService(ctx: AppContext) {
       if (patch.boundary !== undefined)
         row.boundary = patch.boundary ? JSON.stringify(patch.boundary) : null;
       if (patch.sunnyAzimuthDeg !== undefined) row.sunny_azimuth_deg = patch.sunnyAzimuthDeg;
-      if (Object.keys(row).length > 0) await repo.update(id, row);
-      await audit.record({
-        sugarbushId: id,
-        userId,
-        action: 'update',
-        entity: 'sugarbush',
-        entityId: id,
-        detail: Object.keys(row),
+      const changesAdvice = ['profile', 'custom_profile', 'sunny_azimuth_deg'].some(
+        (column) => column in row,
+      );
+      await ctx.db.transaction(async (trx) => {
+        if (Object.keys(row).length > 0) await sugarbushesRepository(trx).update(id, row);
+        if (changesAdvice) await guidelineChanged(trx, id);
+        await auditRepository(trx).record({
+          sugarbushId: id,
+          userId,
+          action: 'update',
+          entity: 'sugarbush',
+          entityId: id,
+          detail: Object.keys(row),
+        });
       });
       return this.get(userId, id);
     },

@@ -6,12 +6,12 @@ import { parsed, validate } from '../../middleware/validate';
 import { auditRepository } from '../audit/audit.repository';
 import { listQuerySchema, type ListQuery } from '../../../shared/schemas/list-query';
 import { tapholeInputSchema, type TapholeInput } from '../../../shared/schemas/taphole';
+import { refreshTrees } from '../advice/refresh-trees';
 import { tapholesRepository } from './tapholes.repository';
 
 export function tapholesRoutes(ctx: AppContext) {
   const router = Router();
   const repo = tapholesRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
 
   router.get(
     '/trees/:treeId/tapholes',
@@ -30,13 +30,22 @@ export function tapholesRoutes(ctx: AppContext) {
     validate({ body: tapholeInputSchema }),
     async (_req, res) => {
       const { sugarbushId, userId } = accessOf(res);
-      const hole = await repo.create(res.locals.treeId, userId, parsed<TapholeInput>(res, 'body'));
-      await audit.record({
-        sugarbushId,
-        userId,
-        action: 'create',
-        entity: 'taphole',
-        entityId: hole.id,
+      const treeId = res.locals.treeId as number;
+      const hole = await ctx.db.transaction(async (trx) => {
+        const made = await tapholesRepository(trx).create(
+          treeId,
+          userId,
+          parsed<TapholeInput>(res, 'body'),
+        );
+        await auditRepository(trx).record({
+          sugarbushId,
+          userId,
+          action: 'create',
+          entity: 'taphole',
+          entityId: made.id,
+        });
+        await refreshTrees(trx, sugarbushId, [treeId]);
+        return made;
       });
       res.status(201).json(hole);
     },

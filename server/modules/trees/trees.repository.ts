@@ -27,24 +27,9 @@ const toTree = (r: Row): Tree => ({
   latestCrownDiebackPct: r.crown_dieback_pct,
 });
 
-/** Each tree's newest measurement that no later row corrects. */
-const latestMeasurements = (db: Knex) =>
-  db
-    .select(
-      'm.tree_id',
-      'm.dbh_cm',
-      'm.measured_on',
-      'm.crown_dieback_pct',
-      db.raw(
-        'row_number() over (partition by m.tree_id order by m.measured_on desc, m.id desc) as rn',
-      ),
-    )
-    .from('measurements as m')
-    .whereNotExists(db('measurements as c').select(db.raw('1')).whereRaw('c.corrects_id = m.id'));
-
 const sortColumns: Record<string, string> = {
   tag: 't.tag',
-  dbh: 'l.dbh_cm',
+  dbh: 't.latest_dbh_cm',
   status: 't.status',
   species: 't.species',
 };
@@ -59,14 +44,21 @@ export interface TreeFilters {
 }
 
 export function treesRepository(db: Knex) {
-  const base = () =>
-    db
-      .with('latest', latestMeasurements(db))
-      .from('trees as t')
-      .leftJoin('latest as l', function () {
-        this.on('l.tree_id', 't.id').andOn('l.rn', db.raw('1'));
-      });
-  const columns = ['t.*', 'l.dbh_cm', 'l.measured_on', 'l.crown_dieback_pct'];
+  // The latest standing measurement is kept on the tree row (see refreshTrees), so a page of
+  // the register reads only the trees it shows.
+  const base = () => db.from('trees as t');
+  const columns = [
+    't.id',
+    't.sugarbush_id',
+    't.tag',
+    't.species',
+    't.lat',
+    't.lng',
+    't.status',
+    't.latest_dbh_cm as dbh_cm',
+    't.latest_measured_on as measured_on',
+    't.latest_crown_dieback_pct as crown_dieback_pct',
+  ];
 
   return {
     async list(sugarbushId: number, f: TreeFilters) {

@@ -5,6 +5,7 @@ import { auditRepository } from '../audit/audit.repository';
 import type { Page } from '../../../shared/schemas/list-query';
 import type { Tree, TreePatch } from '../../../shared/schemas/tree';
 import type { TreeListQuery } from './trees.routes';
+import { refreshTrees } from '../advice/refresh-trees';
 import { treesRepository } from './trees.repository';
 import type { z } from 'zod';
 import type { treeInputSchema } from '../../../shared/schemas/tree';
@@ -19,7 +20,6 @@ const isUniqueViolation = (err: unknown) =>
 
 export function treesService(ctx: AppContext) {
   const repo = treesRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
 
   return {
     async list(sugarbushId: number, q: TreeListQuery): Promise<Page<Tree>> {
@@ -40,19 +40,23 @@ export function treesService(ctx: AppContext) {
       if (await repo.findByTag(sugarbushId, input.tag)) throw duplicateTag(input.tag);
       let id: number;
       try {
-        id = await repo.create(sugarbushId, input);
+        id = await ctx.db.transaction(async (trx) => {
+          const newId = await treesRepository(trx).create(sugarbushId, input);
+          await auditRepository(trx).record({
+            sugarbushId,
+            userId,
+            action: 'create',
+            entity: 'tree',
+            entityId: newId,
+            detail: input,
+          });
+          await refreshTrees(trx, sugarbushId, [newId]);
+          return newId;
+        });
       } catch (err) {
         if (isUniqueViolation(err)) throw duplicateTag(input.tag);
         throw err;
       }
-      await audit.record({
-        sugarbushId,
-        userId,
-        action: 'create',
-        entity: 'tree',
-        entityId: id,
-        detail: input,
-      });
       return this.get(id);
     },
 
@@ -67,22 +71,23 @@ export function treesService(ctx: AppContext) {
         if (other && other.id !== treeId) throw duplicateTag(patch.tag);
       }
       const row = Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined));
-      if (Object.keys(row).length > 0) {
-        try {
-          await repo.update(treeId, row);
-        } catch (err) {
-          if (isUniqueViolation(err)) throw duplicateTag(String(patch.tag));
-          throw err;
-        }
+      try {
+        await ctx.db.transaction(async (trx) => {
+          if (Object.keys(row).length > 0) await treesRepository(trx).update(treeId, row);
+          await auditRepository(trx).record({
+            sugarbushId,
+            userId,
+            action: 'update',
+            entity: 'tree',
+            entityId: treeId,
+            detail: row,
+          });
+          await refreshTrees(trx, sugarbushId, [treeId]);
+        });
+      } catch (err) {
+        if (isUniqueViolation(err)) throw duplicateTag(String(patch.tag));
+        throw err;
       }
-      await audit.record({
-        sugarbushId,
-        userId,
-        action: 'update',
-        entity: 'tree',
-        entityId: treeId,
-        detail: row,
-      });
       return this.get(treeId);
     },
   };

@@ -189,3 +189,26 @@ describe('the season plan', () => {
     expect(print).toHaveBeenCalledOnce();
   });
 });
+
+describe('while the stand is re-advised', () => {
+  it('when the plan is still on its way and the advice is updating, then the page says how far it has come', async () => {
+    const season = upcomingSeason();
+    let answerPlan: (reply: { status: number; body: unknown }) => void = () => undefined;
+    const { api } = openPlan({
+      [PLAN]: () =>
+        new Promise<{ status: number; body: unknown }>((resolve) => (answerPlan = resolve)),
+      'GET /api/sugarbushes/3/advice-status': { season, state: 'updating', done: 420, total: 1187 },
+    });
+    expect(
+      await screen.findByText(`Updating the advice for ${season}: 420 of 1,187 trees`),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('progressbar', { name: 'Advice updated so far' })).toHaveAttribute(
+      'value',
+      '420',
+    );
+    answerPlan({ status: 200, body: standPlan(items, { total: 2 }) });
+    await screen.findByRole('table', { name: 'Season plan' });
+    expect(screen.queryByText(/Updating the advice/)).not.toBeInTheDocument();
+    expect(api.to('GET /api/sugarbushes/3/advice-status').length).toBeGreaterThan(0);
+  });
+});

@@ -1,4 +1,5 @@
 import { ErrorState } from '@/components/ui/error-state';
+import { AdviceProgress } from '@/components/advice-progress';
 import { Skeleton } from '@/components/ui/skeleton';
 import { useSugarbush } from '@/features/sugarbushes/api/get-sugarbush';
 import { useMapTrees } from '../api/get-map-trees';
@@ -11,9 +12,12 @@ export function WoodsMap({ sugarbushId }: { sugarbushId: number }) {
 
   if (map.isPending || sugarbush.isPending) {
     return (
-      <div role="status" aria-label="Loading the map" className="flex flex-col gap-4">
-        <Skeleton className="h-11 w-full" />
-        <Skeleton className="h-[60vh] w-full" />
+      <div className="flex flex-col gap-4">
+        <AdviceProgress sugarbushId={sugarbushId} waiting={map.isPending} />
+        <div role="status" aria-label="Loading the map" className="flex flex-col gap-4">
+          <Skeleton className="h-11 w-full" />
+          <Skeleton className="h-[60vh] w-full" />
+        </div>
       </div>
     );
   }

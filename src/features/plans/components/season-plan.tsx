@@ -3,6 +3,7 @@ import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Pager, pageRange } from '@/components/ui/pager';
+import { AdviceProgress } from '@/components/advice-progress';
 import { Skeleton, TableSkeleton } from '@/components/ui/skeleton';
 import { UnitToggle } from '@/components/ui/unit-toggle';
 import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
@@ -68,6 +69,7 @@ export function SeasonPlan({
     return (
       <>
         {header}
+        <AdviceProgress sugarbushId={sugarbushId} season={filters.season} waiting />
         <div role="status" aria-label="Loading the season plan">
           <Skeleton className="mb-4 h-20 w-full" />
           <TableSkeleton label="Loading plan rows" />

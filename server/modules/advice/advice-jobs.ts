@@ -1,0 +1,160 @@
+import os from 'node:os';
+import type { Knex } from 'knex';
+import { Piscina } from 'piscina';
+import { AppError } from '../../errors';
+import type { Logger } from '../../lib/logger';
+import type { AdviceStatus } from '../../../shared/schemas/advice-status';
+import { adviceRepository } from './advice.repository';
+import type { AdviceTask, PlannedTree } from './advice-worker-tasks';
+
+/** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
+const CHUNK = 500;
+const MAX_ROUNDS = 5;
+
+type TaskInput = AdviceTask extends infer T
+  ? T extends AdviceTask
+    ? Omit<T, 'databaseFile'>
+    : never
+  : never;
+
+export interface AdviceJobs {
+  /** Resolves with the guideline version whose rows are complete for the season, once they are. */
+  ensure(sugarbushId: number, season: number, opts?: { recheck?: boolean }): Promise<number>;
+  status(sugarbushId: number, season: number): Promise<AdviceStatus>;
+  /** Every tree's taps and verdict under another guideline, computed in a worker, not stored. */
+  planWith(
+    sugarbushId: number,
+    season: number,
+    guideline: { profile: string; customJson: string | null },
+  ): Promise<PlannedTree[]>;
+  close(): Promise<void>;
+}
+
+/**
+ * Whole-stand advice, kept current by worker threads. One job per stand and season at a time in
+ * this process; a second process on the same database may run its own, and the version stamps on
+ * every row keep either from serving or keeping advice made from an older record.
+ */
+export function createAdviceJobs(opts: {
+  db: Knex;
+  databaseFile: string;
+  log: Logger;
+}): AdviceJobs {
+  const { db, databaseFile, log } = opts;
+  const repo = adviceRepository(db);
+  const running = new Map<string, { promise: Promise<number>; done: number; total: number }>();
+  let pool: Piscina | null = null;
+  const workers = () =>
+    (pool ??= new Piscina({
+      filename: new URL('./advice.worker.mjs', import.meta.url).href,
+      minThreads: 0,
+      maxThreads: Math.max(1, os.availableParallelism() - 1),
+      idleTimeout: 15_000,
+    }));
+  const task = <T>(t: TaskInput) =>
+    workers().run({ ...t, databaseFile } as AdviceTask) as Promise<T>;
+
+  async function adviceVersion(sugarbushId: number): Promise<number> {
+    const row = await db('sugarbushes').where({ id: sugarbushId }).first('advice_version');
+    if (!row) throw new AppError(404, 'not-found', 'Sugarbush not found');
+    return Number(row.advice_version);
+  }
+
+  async function run(sugarbushId: number, season: number, job: { done: number; total: number }) {
+    for (let round = 0; round < MAX_ROUNDS; round++) {
+      const version = await adviceVersion(sugarbushId);
+      const stale = await task<number[]>({
+        kind: 'stale',
+        sugarbushId,
+        season,
+        standVersion: version,
+      });
+      job.done = 0;
+      job.total = stale.length;
+      if (stale.length > 0) {
+        await repo.setState({
+          sugarbush_id: sugarbushId,
+          season,
+          stand_version: version,
+          state: 'updating',
+          done: 0,
+          total: stale.length,
+        });
+        const chunks: number[][] = [];
+        for (let i = 0; i < stale.length; i += CHUNK) chunks.push(stale.slice(i, i + CHUNK));
+        await Promise.all(
+          chunks.map(async (treeIds) => {
+            job.done += await task<number>({ kind: 'advise', sugarbushId, season, treeIds });
+          }),
+        );
+      }
+      if ((await adviceVersion(sugarbushId)) !== version) continue; // changed meanwhile: again
+      const left = await task<number[]>({
+        kind: 'stale',
+        sugarbushId,
+        season,
+        standVersion: version,
+      });
+      if (left.length > 0) continue; // a tree was added or changed meanwhile
+      // Stored advice changed: whatever was derived from it (cached totals) is out of date.
+      if (stale.length > 0)
+        await db('sugarbushes').where({ id: sugarbushId }).increment('record_seq', 1);
+      await repo.setState({
+        sugarbush_id: sugarbushId,
+        season,
+        stand_version: version,
+        state: 'current',
+        done: job.total,
+        total: job.total,
+      });
+      return version;
+    }
+    throw new AppError(503, 'advice-busy', 'The stand keeps changing: try again in a moment');
+  }
+
+  return {
+    async ensure(sugarbushId, season, opts) {
+      const key = `${sugarbushId}:${season}`;
+      const inFlight = running.get(key);
+      if (inFlight) return inFlight.promise;
+      const [version, state] = await Promise.all([
+        adviceVersion(sugarbushId),
+        repo.state(sugarbushId, season),
+      ]);
+      if (!opts?.recheck && state?.state === 'current' && Number(state.stand_version) === version)
+        return version;
+      const again = running.get(key); // another request started it while we looked
+      if (again) return again.promise;
+      const job = { done: 0, total: 0, promise: Promise.resolve(0) };
+      job.promise = run(sugarbushId, season, job).finally(() => running.delete(key));
+      running.set(key, job);
+      return job.promise;
+    },
+
+    async status(sugarbushId, season) {
+      const job = running.get(`${sugarbushId}:${season}`);
+      if (job) return { season, state: 'updating', done: job.done, total: job.total };
+      const [version, state] = await Promise.all([
+        adviceVersion(sugarbushId),
+        repo.state(sugarbushId, season),
+      ]);
+      if (state?.state === 'current' && Number(state.stand_version) === version)
+        return { season, state: 'current', done: Number(state.total), total: Number(state.total) };
+      // Not current and nobody here is on it: start it, and say so.
+      this.ensure(sugarbushId, season).catch((err: unknown) =>
+        log.error(`Advice for stand ${sugarbushId}, season ${season} failed`, err),
+      );
+      return { season, state: 'updating', done: 0, total: Number(state?.total ?? 0) };
+    },
+
+    planWith(sugarbushId, season, guideline) {
+      return task<PlannedTree[]>({ kind: 'plan-with', sugarbushId, season, guideline });
+    },
+
+    async close() {
+      await Promise.allSettled([...running.values()].map((j) => j.promise));
+      await pool?.destroy();
+      pool = null;
+    },
+  };
+}
