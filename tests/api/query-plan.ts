@@ -53,12 +53,14 @@ function aliases(sql: string): Map<string, string> {
 /**
  * The steps of a plan that read a whole table of the app's own (`SCAN t`, `SCAN t USING INDEX`
  * walks every row) or make SQLite build an index of its own for want of one. A scan of a
- * subquery's or a CTE's result is not one: what it read is judged in its own steps.
+ * subquery's or a CTE's result, or of a statement's own VALUES list, is not one: what a subquery
+ * read is judged in its own steps.
  */
 export function offIndexSteps(sql: string, plan: readonly string[], ctes: readonly string[] = []) {
   const tables = aliases(sql);
   return plan.filter((step) => {
     if (/AUTOMATIC/.test(step)) return true;
+    if (/^SCAN (\d+-ROW VALUES CLAUSE|CONSTANT ROW)/.test(step)) return false;
     const scan = /^SCAN (\w+)/.exec(step);
     if (!scan) return false;
     const table = tables.get(scan[1]) ?? scan[1];

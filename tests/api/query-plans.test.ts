@@ -9,6 +9,8 @@ import os from 'node:os';
 import path from 'node:path';
 import Database from 'better-sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { adviceRepository } from '../../server/modules/advice/advice.repository';
+import { adviseAndStore } from '../../server/modules/advice/advise-and-store';
 import { inspectMbtiles } from '../../server/modules/basemaps/mbtiles';
 import { TILE_LOOKUP_SQL } from '../../server/modules/basemaps/tile-store';
 import { solidPng, writeMbtiles } from './mbtiles-fixture';
@@ -20,7 +22,8 @@ import {
   queriesDuring,
   type CapturedQuery,
 } from './query-plan';
-import { addTree, makeTestApp, signIn, standWithTeam } from './test-app';
+import { upcomingSeason } from '../../shared/schemas/plan';
+import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
@@ -62,16 +65,16 @@ beforeAll(async () => {
     });
     treeId = id;
   }
+  await recordsWritten(t.db, team.standId);
   owner = await signIn(t.app, team.users.owner);
+  // The season's advice stored once, so the reads below are the steady state's.
+  expect((await owner.agent.get(`/api/sugarbushes/${team.standId}/plan`)).status).toBe(200);
 });
 afterAll(() => t.close());
 
-/** The statements a GET sends, each with the plan steps that leave the indexes. */
-async function offIndex(url: string) {
-  const queries = await queriesDuring(t.db, async () => {
-    const res = await owner.agent.get(url);
-    expect(res.status).toBe(200);
-  });
+/** The statements `work` sends, each with the plan steps that leave the indexes. */
+async function offIndexDuring(work: () => Promise<unknown>) {
+  const queries = await queriesDuring(t.db, work);
   expect(queries.length).toBeGreaterThan(0);
   const report: { sql: string; steps: string[] }[] = [];
   for (const q of queries as CapturedQuery[]) {
@@ -81,21 +84,70 @@ async function offIndex(url: string) {
   return report;
 }
 
-describe('query plans of the hot reads', () => {
-  // The register's latest reading is a window over every measurement of every stand, so these
-  // two walk the whole measurements table today (see docs/benchmarks.md); they turn into plain
-  // `it`s once the latest reading is kept on the tree row.
-  it.fails(
-    'when a page of the tree register is read, then no statement walks a whole table',
-    async () => {
-      expect(await offIndex(`/api/sugarbushes/${team.standId}/trees?page=1&pageSize=50`)).toEqual(
-        [],
-      );
-    },
-  );
+const offIndex = (url: string) =>
+  offIndexDuring(async () => {
+    const res = await owner.agent.get(url);
+    expect(res.status).toBe(200);
+  });
 
-  it.fails('when one tree is read, then no statement walks a whole table', async () => {
+describe('query plans of the hot reads', () => {
+  it('when a page of the tree register is read, in each order and filter, then no statement walks a whole table', async () => {
+    for (const query of ['', '&sort=-dbh', '&sort=species', '&status=dead', '&q=Q-0']) {
+      const url = `/api/sugarbushes/${team.standId}/trees?page=1&pageSize=50${query}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
+  it('when one tree is read, then no statement walks a whole table', async () => {
     expect(await offIndex(`/api/trees/${treeId}`)).toEqual([]);
+  });
+
+  it('when a plan page is read, in each order and filter, then no statement walks a whole table', async () => {
+    for (const query of [
+      '',
+      '&sort=-taps',
+      '&sort=share',
+      '&sort=dbh',
+      '&sort=verdict',
+      '&verdict=tap',
+      '&warning=slow-growth',
+      '&q=Q-0',
+    ]) {
+      const url = `/api/sugarbushes/${team.standId}/plan?page=1&pageSize=50${query}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
+  it('when the woods map, the stand figures or the advice status are read, then no statement walks a whole table', async () => {
+    for (const path of ['map', 'figures', 'advice-status']) {
+      const url = `/api/sugarbushes/${team.standId}/${path}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
+  it("when a tree's advice page is read, then no statement walks a whole table", async () => {
+    expect(await offIndex(`/api/trees/${treeId}/advice`)).toEqual([]);
+  });
+
+  it('when a measurement is recorded and its tree re-advised, then no statement walks a whole table', async () => {
+    const steps = await offIndexDuring(async () => {
+      const res = await owner.agent
+        .post(`/api/trees/${treeId}/measurements`)
+        .set('x-csrf-token', owner.csrf)
+        .send({ measuredOn: '2025-11-20', dbhCm: 43.2, crownDiebackPct: 0 });
+      expect(res.status).toBe(201);
+    });
+    expect(steps).toEqual([]);
+  });
+
+  it("when the stand's advice is recomputed, then a worker's statements stay on their indexes", async () => {
+    const season = upcomingSeason();
+    const ids = (await t.db('trees').where({ sugarbush_id: team.standId }).pluck('id')).map(Number);
+    const steps = await offIndexDuring(async () => {
+      await adviceRepository(t.db).staleTreeIds(team.standId, season, 0);
+      await adviseAndStore(t.db, team.standId, season, ids.slice(0, 5));
+    });
+    expect(steps).toEqual([]);
   });
 
   it('when a tile is looked up in an uploaded basemap, then it is found through the lookup index', () => {
