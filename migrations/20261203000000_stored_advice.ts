@@ -53,18 +53,19 @@ async function refreshLatestMeasurements(knex: Knex): Promise<void> {
     knex('measurements as m')
       .select(`m.${column}`)
       .whereRaw('m.tree_id = trees.id')
-      .whereNotExists(knex('measurements as c').select(knex.raw('1')).whereRaw('c.corrects_id = m.id'))
+      .whereNotExists(
+        knex('measurements as c').select(knex.raw('1')).whereRaw('c.corrects_id = m.id'),
+      )
       .orderBy([
         { column: 'm.measured_on', order: 'desc' },
         { column: 'm.id', order: 'desc' },
       ])
       .limit(1);
-  await knex('trees')
-    .update({
-      latest_dbh_cm: latest('dbh_cm'),
-      latest_measured_on: latest('measured_on'),
-      latest_crown_dieback_pct: latest('crown_dieback_pct'),
-    });
+  await knex('trees').update({
+    latest_dbh_cm: latest('dbh_cm'),
+    latest_measured_on: latest('measured_on'),
+    latest_crown_dieback_pct: latest('crown_dieback_pct'),
+  });
 }
 
 export async function down(knex: Knex): Promise<void> {

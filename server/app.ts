@@ -44,7 +44,7 @@ export function createApp(opts: AppOptions) {
     log,
     mailer: opts.mailer ?? createMailer(config, db, log),
     background: createBackground(log),
-    advice: createAdviceJobs({ db, databaseFile: config.DATABASE_FILE, log }),
+    advice: createAdviceJobs({ db, database: config.database, log }),
   };
   const production = config.NODE_ENV === 'production';
   const app = express();

@@ -26,6 +26,18 @@ const trustProxy = z
     return v;
   });
 
+/**
+ * `DATABASE_URL`: a PostgreSQL server instead of the SQLite file, for more than one app process
+ * (or machine) on one database. Only `postgres://` and `postgresql://` URLs.
+ */
+const databaseUrl = z
+  .string()
+  .trim()
+  .url()
+  .refine((v) => /^postgres(ql)?:\/\//i.test(v), {
+    message: 'must be a postgres:// or postgresql:// URL',
+  });
+
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   /** 0 picks a free port (tests). */
@@ -33,6 +45,10 @@ const envSchema = z.object({
   /** The interface to listen on; every interface when unset. */
   HOST: z.string().trim().min(1).optional(),
   DATABASE_FILE: z.string().min(1).default('data/clearwood.sqlite'),
+  /** Empty counts as unset, so `DATABASE_URL=` selects the SQLite file again. */
+  DATABASE_URL: z.preprocess((v) => (v === '' ? undefined : v), databaseUrl.optional()),
+  /** Connections each app process keeps to PostgreSQL (SQLite always uses one). */
+  DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   SESSION_SECRET: z.string().min(16).default(DEFAULT_SESSION_SECRET),
   /** Send cookies only over HTTPS (and send HSTS); off for plain-http local runs. */
   COOKIE_SECURE: bool.default(false),
@@ -61,10 +77,16 @@ const envSchema = z.object({
 });
 
 type Parsed = z.infer<typeof envSchema>;
+
+/** Where the data lives: the SQLite file (the default) or a PostgreSQL server. */
+export type DatabaseTarget =
+  { client: 'sqlite'; filename: string } | { client: 'pg'; url: string; poolMax: number };
+
 export type Config = Omit<Parsed, 'SEED_DEMO' | 'BASEMAP_DIR'> & {
   appUrl: string;
   SEED_DEMO: boolean;
   BASEMAP_DIR: string;
+  database: DatabaseTarget;
 };
 
 /** Parse the environment once; a bad value stops start-up with a message naming each variable. */
@@ -92,7 +114,25 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     SEED_DEMO: c.SEED_DEMO ?? !production,
     appUrl: c.APP_URL ?? `http://localhost:${c.PORT}`,
     BASEMAP_DIR: c.BASEMAP_DIR ?? path.join(path.dirname(c.DATABASE_FILE), 'basemaps'),
+    database: c.DATABASE_URL
+      ? { client: 'pg', url: c.DATABASE_URL, poolMax: c.DATABASE_POOL_MAX }
+      : { client: 'sqlite', filename: c.DATABASE_FILE },
   };
 }
 
 export class ConfigError extends Error {}
+
+/**
+ * `TEST_DATABASE_URL`, read by the test helpers only: an admin URL of a PostgreSQL server on which
+ * the API tests make (and drop) a database of their own per test app.
+ */
+export function loadTestDatabaseUrl(env: NodeJS.ProcessEnv = process.env): string | undefined {
+  const raw = env.TEST_DATABASE_URL;
+  if (raw === undefined || raw.trim() === '') return undefined;
+  const parsed = databaseUrl.safeParse(raw);
+  if (!parsed.success)
+    throw new ConfigError(
+      `Invalid environment:\n  TEST_DATABASE_URL: ${parsed.error.issues[0].message}`,
+    );
+  return parsed.data;
+}

@@ -1,12 +1,12 @@
 import type { Server } from 'node:http';
 import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
-import { createDb, migrateLatest } from './db';
+import { openDb, migrateLatest } from './db';
 
 /** Migrate, then listen. Resolves once the server accepts connections. */
 export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const config = loadConfig(env);
-  const db = createDb(config.DATABASE_FILE);
+  const db = openDb(config.database);
   await migrateLatest(db);
   const app = createApp({ config, db });
   const server = await new Promise<Server>((resolve, reject) => {

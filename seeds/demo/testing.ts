@@ -1,14 +1,13 @@
 import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import type { Knex } from 'knex';
-import { createDb, migrateLatest } from '../../server/db';
+import { migrateLatest, openDb } from '../../server/db';
+import { freshDatabase, track } from '../../tests/api/test-database';
 import { seed } from '../01_demo';
 
-/** A fresh SQLite file with the schema and the demo, for tests. */
+/** A fresh test database (SQLite, or PostgreSQL with TEST_DATABASE_URL) with the demo, for tests. */
 export async function seededDb(): Promise<{ db: Knex; ms: number; close: () => Promise<void> }> {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'clearwood-demo-'));
-  const db = createDb(path.join(dir, 'demo.sqlite'));
+  const { target, dir } = await freshDatabase();
+  const db = track(openDb(target));
   await migrateLatest(db);
   const t0 = performance.now();
   await seed(db);

@@ -1,12 +1,12 @@
 import { loadConfig } from '../config';
-import { createDb, migrateLatest } from '../db';
+import { describeDb, migrateLatest, openDb } from '../db';
 import { exitOnConfigError } from '../index';
 
 try {
   const config = loadConfig();
-  const db = createDb(config.DATABASE_FILE);
+  const db = openDb(config.database);
   await migrateLatest(db);
-  console.log(`Migrated ${config.DATABASE_FILE}`);
+  console.log(`Migrated ${describeDb(config.database)}`);
   await db.destroy();
 } catch (err) {
   exitOnConfigError(err);

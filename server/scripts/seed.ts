@@ -1,11 +1,11 @@
 import { loadConfig } from '../config';
-import { createDb, migrateLatest } from '../db';
+import { openDb, migrateLatest } from '../db';
 import { exitOnConfigError } from '../index';
 import { seedDemoIfEmpty } from './seed-demo';
 
 try {
   const config = loadConfig();
-  const db = createDb(config.DATABASE_FILE);
+  const db = openDb(config.database);
   await migrateLatest(db);
   const seeded = await seedDemoIfEmpty(db);
   console.log(seeded ? 'Demo data written.' : 'The database already has users: nothing seeded.');

@@ -5,7 +5,7 @@ import { fileURLToPath } from 'node:url';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../seeds/01_demo';
 import { exitOnConfigError, startServer } from '../index';
 import { loadConfig } from '../config';
-import { createDb, migrateLatest } from '../db';
+import { describeDb, migrateLatest, openDb } from '../db';
 import { seedDemoIfEmpty } from './seed-demo';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
@@ -14,7 +14,7 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..')
 async function main() {
   const config = loadConfig();
   if (config.SEED_DEMO) {
-    const db = createDb(config.DATABASE_FILE);
+    const db = openDb(config.database);
     await migrateLatest(db);
     if (await seedDemoIfEmpty(db)) console.log('Seeded the demo sugarbush into an empty database.');
     await db.destroy();
@@ -29,7 +29,7 @@ async function main() {
     if (result.status !== 0) throw new Error('The client build failed');
   }
   const { config: c, db } = await startServer();
-  console.log(`\nClearwood is serving on ${c.appUrl}  (database: ${c.DATABASE_FILE})`);
+  console.log(`\nClearwood is serving on ${c.appUrl}  (database: ${describeDb(c.database)})`);
   const demo = await db('users').where({ email: DEMO_USERS[0].email }).first('id');
   if (demo) {
     console.log(`Sign in at ${c.appUrl}/sign-in with any of these (password ${DEMO_PASSWORD}):`);

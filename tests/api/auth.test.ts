@@ -8,6 +8,7 @@ import {
   makeTestApp,
   signIn,
   standWithTeam,
+  storedTime,
 } from './test-app';
 
 const closers: (() => Promise<void>)[] = [];
@@ -67,7 +68,7 @@ describe('signing in and out', () => {
     const cookies = (await agent.get('/api/auth/me')).request.cookies as unknown as string;
     await first.close();
 
-    const second = await makeTestApp({}, first.dbFile);
+    const second = await makeTestApp({}, first.database);
     closers.push(second.close);
     const me = await request(second.app).get('/api/auth/me').set('Cookie', cookies);
     expect(me.status).toBe(200);
@@ -261,9 +262,7 @@ describe('resetting a password', () => {
     await ctx.background.idle();
     const token = linkToken((await lastMailTo(db, users.forester)).body, '/reset-password');
     const row = await db('tokens').where({ purpose: 'password-reset' }).first();
-    const lifetime =
-      new Date(row.expires_at).getTime() -
-      new Date(`${String(row.created_at).replace(' ', 'T')}Z`).getTime();
+    const lifetime = storedTime(row.expires_at) - storedTime(row.created_at);
     expect(lifetime).toBeLessThanOrEqual(3600_000 + 5000);
     await db('tokens')
       .where({ id: row.id })

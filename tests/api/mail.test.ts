@@ -8,7 +8,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import type { Logger } from '../../server/lib/logger';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
-import { createDb, migrateLatest } from '../../server/db';
+import { migrateLatest, openDb } from '../../server/db';
 import { csrfAgent, lastMailTo, linkToken, makeTestApp, standWithTeam } from './test-app';
 
 const closers: (() => Promise<void>)[] = [];
@@ -177,11 +177,11 @@ describe('mail by SMTP', () => {
   });
 });
 
-describe('a second app on the same file', () => {
+describe('a second app on the same database', () => {
   it('when a database is shared, then its outbox is only in the table', async () => {
     const t = await makeTestApp();
     closers.push(t.close);
-    const db = createDb(t.dbFile);
+    const db = openDb(t.config.database);
     closers.push(() => db.destroy());
     await migrateLatest(db);
     expect(await db('outbox').count({ n: '*' })).toEqual([{ n: 0 }]);

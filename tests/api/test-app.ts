@@ -1,5 +1,3 @@
-import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import type { Knex } from 'knex';
@@ -7,24 +5,35 @@ import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { quietLogger } from '../../server/lib/logger';
 import { refreshTrees } from '../../server/modules/advice/refresh-trees';
-import { createDb, migrateLatest } from '../../server/db';
+import { migrateLatest, openDb } from '../../server/db';
 import { hashPassword } from '../../server/modules/auth/password';
 import type { Role } from '../../shared/schemas/enums';
+import { freshDatabase, track, type TestDatabase } from './test-database';
 
 export const PASSWORD = 'correct-horse-battery';
 
-/** A real app on a fresh temporary SQLite file, migrated. */
-export async function makeTestApp(env: Record<string, string> = {}, file?: string) {
-  const dbFile =
-    file ?? path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'clearwood-test-')), 'test.sqlite');
+/** The environment that points an app at this test database. */
+export function databaseEnv({ target, dir }: TestDatabase): Record<string, string> {
+  return target.client === 'pg'
+    ? { DATABASE_URL: target.url, BASEMAP_DIR: path.join(dir, 'basemaps') }
+    : { DATABASE_FILE: target.filename };
+}
+
+/**
+ * A real app on a fresh database — a temporary SQLite file, or a PostgreSQL database of its own
+ * when `TEST_DATABASE_URL` is set — migrated. Pass another app's `database` to open a second app
+ * (its own pool, as a second process would have) on the same data.
+ */
+export async function makeTestApp(env: Record<string, string> = {}, database?: TestDatabase) {
+  const own = database ?? (await freshDatabase());
   const config = loadConfig({
     NODE_ENV: 'test',
-    DATABASE_FILE: dbFile,
+    ...databaseEnv(own),
     LOGIN_RATE_LIMIT: '1000',
     SESSION_SECRET: 'a-test-secret-of-enough-length',
     ...env,
   });
-  const db = createDb(dbFile);
+  const db = track(openDb(config.database));
   await migrateLatest(db);
   const app = createApp({ config, db, clientDir: null, log: quietLogger });
   const close = async () => {
@@ -32,8 +41,15 @@ export async function makeTestApp(env: Record<string, string> = {}, file?: strin
     await app.ctx.advice.close();
     await db.destroy();
   };
-  return { app, db, config, dbFile, ctx: app.ctx, close };
+  return { app, db, config, database: own, ctx: app.ctx, close };
 }
+
+/**
+ * A stored timestamp in epoch ms. SQLite's column defaults read `YYYY-MM-DD HH:MM:SS` (UTC, no
+ * zone); values written from code, and every timestamp PostgreSQL returns, are ISO strings.
+ */
+export const storedTime = (value: string): number =>
+  new Date(/^\d{4}-\d\d-\d\d \d/.test(value) ? `${value.replace(' ', 'T')}Z` : value).getTime();
 
 let hashed: string | undefined;
 

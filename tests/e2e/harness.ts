@@ -12,6 +12,7 @@ export async function startDemoServer() {
     ...process.env,
     NODE_ENV: 'test',
     PORT: '0',
+    DATABASE_URL: undefined,
     DATABASE_FILE: path.join(dir, 'e2e.sqlite'),
     LOGIN_RATE_LIMIT: '1000',
   });

@@ -1,6 +1,7 @@
 import os from 'node:os';
 import type { Knex } from 'knex';
 import { Piscina } from 'piscina';
+import type { DatabaseTarget } from '../../config';
 import { AppError } from '../../errors';
 import type { Logger } from '../../lib/logger';
 import type { AdviceStatus } from '../../../shared/schemas/advice-status';
@@ -13,7 +14,7 @@ const MAX_ROUNDS = 5;
 
 type TaskInput = AdviceTask extends infer T
   ? T extends AdviceTask
-    ? Omit<T, 'databaseFile'>
+    ? Omit<T, 'database'>
     : never
   : never;
 
@@ -37,10 +38,10 @@ export interface AdviceJobs {
  */
 export function createAdviceJobs(opts: {
   db: Knex;
-  databaseFile: string;
+  database: DatabaseTarget;
   log: Logger;
 }): AdviceJobs {
-  const { db, databaseFile, log } = opts;
+  const { db, database, log } = opts;
   const repo = adviceRepository(db);
   const running = new Map<string, { promise: Promise<number>; done: number; total: number }>();
   let pool: Piscina | null = null;
@@ -51,8 +52,7 @@ export function createAdviceJobs(opts: {
       maxThreads: Math.max(1, os.availableParallelism() - 1),
       idleTimeout: 15_000,
     }));
-  const task = <T>(t: TaskInput) =>
-    workers().run({ ...t, databaseFile } as AdviceTask) as Promise<T>;
+  const task = <T>(t: TaskInput) => workers().run({ ...t, database } as AdviceTask) as Promise<T>;
 
   async function adviceVersion(sugarbushId: number): Promise<number> {
     const row = await db('sugarbushes').where({ id: sugarbushId }).first('advice_version');

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
-import { createDb } from '../../db';
+import type { DatabaseTarget } from '../../config';
+import { openDb } from '../../db';
 import { adviseTree } from '../../../shared/rules/index';
 import { loadStandTrees } from '../plans/plans.repository';
 import { adviceRepository } from './advice.repository';
@@ -7,7 +8,8 @@ import { adviseAndStore } from './advise-and-store';
 import { profileOf, standGuideline } from './stand-guideline';
 
 interface OnStand {
-  databaseFile: string;
+  /** The app's database, which the worker opens on its own connection. */
+  database: DatabaseTarget;
   sugarbushId: number;
   season: number;
 }
@@ -32,17 +34,21 @@ export interface PlannedTree {
 
 const connections = new Map<string, Knex>();
 
-function dbFor(file: string): Knex {
-  let db = connections.get(file);
+/** One pool per database and worker thread; a worker needs few PostgreSQL connections. */
+function dbFor(target: DatabaseTarget): Knex {
+  const key = target.client === 'pg' ? target.url : target.filename;
+  let db = connections.get(key);
   if (!db) {
-    db = createDb(file);
-    connections.set(file, db);
+    db = openDb(
+      target.client === 'pg' ? { ...target, poolMax: Math.min(2, target.poolMax) } : target,
+    );
+    connections.set(key, db);
   }
   return db;
 }
 
 export async function runAdviceTask(task: AdviceTask): Promise<number[] | number | PlannedTree[]> {
-  const db = dbFor(task.databaseFile);
+  const db = dbFor(task.database);
   if (task.kind === 'stale')
     return adviceRepository(db).staleTreeIds(task.sugarbushId, task.season, task.standVersion);
   if (task.kind === 'advise')

@@ -1,7 +1,9 @@
 import type { Request } from 'express';
 import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
+import type { Knex } from 'knex';
 import type { Config } from '../../config';
 import { AppError } from '../../errors';
+import { DatabaseRateLimitStore } from './rate-limit-store';
 
 const WINDOW_MS = 15 * 60_000;
 
@@ -14,8 +16,14 @@ const accountKey = (req: Request) =>
 /** The client's address: the socket's, or a configured proxy's `X-Forwarded-For` (TRUST_PROXY). */
 const addressKey = (req: Request) => `address:${ipKeyGenerator(req.ip ?? '')}`;
 
-function limiter(config: Config, keyGenerator: Options['keyGenerator'], extra: Partial<Options>) {
+function limiter(
+  config: Config,
+  store: DatabaseRateLimitStore,
+  keyGenerator: Options['keyGenerator'],
+  extra: Partial<Options>,
+) {
   return rateLimit({
+    store,
     windowMs: WINDOW_MS,
     limit: config.LOGIN_RATE_LIMIT,
     standardHeaders: 'draft-8',
@@ -32,13 +40,21 @@ function limiter(config: Config, keyGenerator: Options['keyGenerator'], extra: P
 /**
  * Throttles for the account routes, built per app: sign-in failures count per address and per
  * account (so neither many accounts from one place nor one account from many places gets far);
- * sign-up and reset requests count per address, reset requests also per account.
+ * sign-up and reset requests count per address, reset requests also per account. The counts live
+ * in the database, shared by every app process on it.
  */
-export function authLimits(config: Config) {
+export function authLimits(config: Config, db: Knex) {
   const failures = { skipSuccessfulRequests: true };
+  const store = (name: string) => new DatabaseRateLimitStore(db, `${name}:`);
   return {
-    signIn: [limiter(config, addressKey, failures), limiter(config, accountKey, failures)],
-    signUp: [limiter(config, addressKey, {})],
-    reset: [limiter(config, addressKey, {}), limiter(config, accountKey, {})],
+    signIn: [
+      limiter(config, store('sign-in'), addressKey, failures),
+      limiter(config, store('sign-in'), accountKey, failures),
+    ],
+    signUp: [limiter(config, store('sign-up'), addressKey, {})],
+    reset: [
+      limiter(config, store('reset'), addressKey, {}),
+      limiter(config, store('reset'), accountKey, {}),
+    ],
   };
 }

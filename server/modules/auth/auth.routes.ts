@@ -29,7 +29,7 @@ export function authRoutes(
 ) {
   const router = Router();
   const service = authService(ctx);
-  const limits = authLimits(ctx.config);
+  const limits = authLimits(ctx.config, ctx.db);
 
   router.get('/csrf', (req, res) => {
     ensureAnonymousId(req, res, ctx.config.COOKIE_SECURE);

@@ -1,5 +1,6 @@
 import type { AppContext } from '../../context';
 import { AppError } from '../../errors';
+import { isUniqueViolation } from '../../lib/db-engine';
 import { membersRepository } from '../members/members.repository';
 import { toPublicUser, usersRepository } from '../users/users.repository';
 import type {
@@ -86,7 +87,11 @@ export function authService(ctx: AppContext) {
         name: string;
         passwordHash: string;
       };
-      const id = await users.create({ email: row.email, name, passwordHash });
+      const id = await users.create({ email: row.email, name, passwordHash }).catch((err) => {
+        throw isUniqueViolation(err)
+          ? new AppError(409, 'email-taken', 'An account with this e-mail exists: sign in')
+          : err;
+      });
       return toPublicUser((await users.findById(id))!);
     },
 

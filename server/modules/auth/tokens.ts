@@ -63,11 +63,16 @@ export function tokensRepository(db: Knex) {
           .first();
         if (!row || row.used_at || new Date(row.expires_at).getTime() < Date.now())
           return undefined;
+        // Only one use wins when the link is opened twice at once: the other finds it used.
+        const won = await trx('tokens')
+          .where({ id: row.id })
+          .whereNull('used_at')
+          .update({ used_at: nowIso() });
+        if (won !== 1) return undefined;
         await tokensRepository(trx).retire(
           purpose,
           row.user_id !== null ? { userId: row.user_id } : { email: row.email },
         );
-        await trx('tokens').where({ id: row.id }).update({ used_at: nowIso() });
         return row as TokenRow;
       });
     },

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { isPostgres } from '../../lib/db-engine';
 import { insertedId } from '../../lib/paging';
 import type { Role } from '../../../shared/schemas/enums';
 import type { Invitation } from '../../../shared/schemas/invitation';
@@ -40,7 +41,7 @@ export function invitationsRepository(db: Knex) {
   return {
     async listOpen(sugarbushId: number, range: { offset: number; limit: number; q?: string }) {
       const q = open(sugarbushId).modify((qb) => {
-        if (range.q) qb.whereLike('i.email', `%${range.q}%`);
+        if (range.q) qb.whereILike('i.email', `%${range.q}%`);
       });
       const [{ n }] = await q.clone().count({ n: '*' });
       const rows: ListedRow[] = await q
@@ -63,6 +64,18 @@ export function invitationsRepository(db: Knex) {
 
     findByTokenHash: (hash: string) =>
       db<InvitationRow>('invitations').where({ token_hash: hash }).first(),
+
+    /**
+     * The same row, locked until the transaction ends (PostgreSQL): a second acceptance of the
+     * link waits, then reads it accepted. SQLite runs each transaction alone anyway.
+     */
+    lockByTokenHash: (hash: string) =>
+      db<InvitationRow>('invitations')
+        .where({ token_hash: hash })
+        .modify((q) => {
+          if (isPostgres(db)) q.forUpdate();
+        })
+        .first(),
 
     async create(row: {
       sugarbushId: number;

@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import type { AppContext } from '../../context';
 import { AppError, notFound } from '../../errors';
 import type { Access } from '../../middleware/auth';
+import { isUniqueViolation } from '../../lib/db-engine';
 import { pageOf } from '../../lib/paging';
 import { hashToken, newSecretToken } from '../../lib/secret-token';
 import { auditRepository } from '../audit/audit.repository';
@@ -160,7 +161,7 @@ export function invitationsService(ctx: AppContext) {
       const passwordHash = !user && input.password ? await hashPassword(input.password) : undefined;
       const result = await ctx.db.transaction(async (trx) => {
         const row = assertInvitationUsable(
-          await invitationsRepository(trx).findByTokenHash(hashToken(token)),
+          await invitationsRepository(trx).lockByTokenHash(hashToken(token)),
         );
         const joining = user ?? (await createInvitee(trx, row, input, passwordHash));
         if (joining.email !== row.email)
@@ -169,11 +170,17 @@ export function invitationsService(ctx: AppContext) {
             'invitation-other-account',
             `This invitation is for ${row.email}; you are signed in as ${joining.email}`,
           );
+        const alreadyMember = () =>
+          new AppError(409, 'already-member', 'You are on this team already');
         if (await membersRepository(trx).roleOf(joining.id, row.sugarbush_id))
-          throw new AppError(409, 'already-member', 'You are on this team already');
+          throw alreadyMember();
         if (!(await invitationsRepository(trx).markAccepted(row.id, joining.id)))
           throw new AppError(409, 'invitation-used', 'This invitation has been used already');
-        await membersRepository(trx).add(joining.id, row.sugarbush_id, row.role);
+        await membersRepository(trx)
+          .add(joining.id, row.sugarbush_id, row.role)
+          .catch((err: unknown) => {
+            throw isUniqueViolation(err) ? alreadyMember() : err;
+          });
         return { user: joining, sugarbushId: row.sugarbush_id, role: row.role, id: row.id };
       });
       await audit.record({
@@ -197,14 +204,20 @@ async function createInvitee(
   passwordHash: string | undefined,
 ): Promise<PublicUser> {
   const users = usersRepository(trx);
-  if (await users.findByEmail(row.email))
-    throw new AppError(409, 'account-exists', `${row.email} has an account: sign in to join`);
+  const accountExists = () =>
+    new AppError(409, 'account-exists', `${row.email} has an account: sign in to join`);
+  if (await users.findByEmail(row.email)) throw accountExists();
   if (!input.name || !passwordHash) {
     const fields: Record<string, string> = {};
     if (!input.name) fields.name = 'Enter your name';
     if (!passwordHash) fields.password = 'Choose a password';
     throw new AppError(400, 'invalid-input', 'Some fields need attention', fields);
   }
-  const id = await users.create({ email: row.email, name: input.name, passwordHash });
+  // Another link (a sign-up, another stand's invitation) may make the account meanwhile.
+  const id = await users
+    .create({ email: row.email, name: input.name, passwordHash })
+    .catch((err: unknown) => {
+      throw isUniqueViolation(err) ? accountExists() : err;
+    });
   return toPublicUser((await users.findById(id))!);
 }

@@ -57,7 +57,7 @@ export function membersRepository(db: Knex) {
       const q = team(sugarbushId).modify((qb) => {
         if (opts.q)
           qb.where((w) =>
-            w.whereLike('u.name', `%${opts.q}%`).orWhereLike('u.email', `%${opts.q}%`),
+            w.whereILike('u.name', `%${opts.q}%`).orWhereILike('u.email', `%${opts.q}%`),
           );
       });
       const [{ n }] = await q.clone().count({ n: '*' });

@@ -1,6 +1,7 @@
 import type { AppContext } from '../../context';
 import { AppError, notFound } from '../../errors';
 import type { Access } from '../../middleware/auth';
+import { lockRow } from '../../lib/db-engine';
 import { pageOf } from '../../lib/paging';
 import { auditRepository } from '../audit/audit.repository';
 import type { Page } from '../../../shared/schemas/list-query';
@@ -37,9 +38,13 @@ export function membersService(ctx: AppContext) {
       );
     },
 
-    /** One transaction, so two owners demoting each other at once cannot leave none. */
+    /**
+     * One transaction holding the stand's row lock, so two owners demoting each other at once
+     * cannot leave none: the second one counts after the first has committed.
+     */
     async changeRole(access: Access, userId: number, patch: MemberPatch): Promise<Member> {
       const before = await ctx.db.transaction(async (trx) => {
+        await lockRow(trx, 'sugarbushes', access.sugarbushId);
         const members = membersRepository(trx);
         const member = await members.find(access.sugarbushId, userId);
         if (!member) throw notFound('Member');
@@ -62,6 +67,7 @@ export function membersService(ctx: AppContext) {
 
     async remove(access: Access, userId: number): Promise<void> {
       const removed = await ctx.db.transaction(async (trx) => {
+        await lockRow(trx, 'sugarbushes', access.sugarbushId);
         const members = membersRepository(trx);
         const member = await members.find(access.sugarbushId, userId);
         if (!member) throw notFound('Member');

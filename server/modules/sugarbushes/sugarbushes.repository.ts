@@ -43,7 +43,7 @@ export function sugarbushesRepository(db: Knex) {
   return {
     async listFor(userId: number, opts: { offset: number; limit: number; q?: string }) {
       const q = base(userId).modify((qb) => {
-        if (opts.q) qb.whereLike('s.name', `%${opts.q}%`);
+        if (opts.q) qb.whereILike('s.name', `%${opts.q}%`);
       });
       const [{ n }] = await q.clone().clearSelect().count({ n: '*' });
       const rows: Row[] = await q.orderBy('s.name').offset(opts.offset).limit(opts.limit);

@@ -65,7 +65,7 @@ export function treesRepository(db: Knex) {
       const q = base()
         .where('t.sugarbush_id', sugarbushId)
         .modify((qb) => {
-          if (f.q) qb.whereLike('t.tag', `%${f.q}%`);
+          if (f.q) qb.whereILike('t.tag', `%${f.q}%`);
           if (f.status) qb.where('t.status', f.status);
           if (f.species) qb.where('t.species', f.species);
         });

@@ -1,6 +1,7 @@
 import { pageOf } from '../../lib/paging';
 import type { AppContext } from '../../context';
 import { AppError } from '../../errors';
+import { isUniqueViolation } from '../../lib/db-engine';
 import { auditRepository } from '../audit/audit.repository';
 import type { Page } from '../../../shared/schemas/list-query';
 import type { Tree, TreePatch } from '../../../shared/schemas/tree';
@@ -14,9 +15,6 @@ const duplicateTag = (tag: string) =>
   new AppError(409, 'duplicate-tag', `Tag ${tag} is already used in this sugarbush`, {
     tag: `Tag ${tag} is already used in this sugarbush`,
   });
-
-const isUniqueViolation = (err: unknown) =>
-  (err as { code?: string }).code === 'SQLITE_CONSTRAINT_UNIQUE';
 
 export function treesService(ctx: AppContext) {
   const repo = treesRepository(ctx.db);
