@@ -59,16 +59,16 @@ export class Report {
   readonly verdicts: Verdict[] = [];
 
   heading(text: string) {
-    this.parts.push(`\n## ${text}\n`);
+    this.parts.push(`## ${text}`);
     console.log(`\n== ${text}`);
   }
   para(text: string) {
-    this.parts.push(`${text}\n`);
-    console.log(text);
+    this.parts.push(text.trim());
+    console.log(text.trim());
   }
   table(header: readonly string[], rows: readonly (readonly string[])[]) {
     const t = table(header, rows);
-    this.parts.push(`${t}\n`);
+    this.parts.push(t);
     console.log(t);
   }
   verdict(v: Verdict) {
@@ -76,6 +76,6 @@ export class Report {
     return v.text;
   }
   markdown(title: string, preface: string) {
-    return `# ${title}\n\n${preface}\n${this.parts.join('\n')}`;
+    return `# ${title}\n\n${preface}\n\n${this.parts.join('\n\n')}\n`;
   }
 }

@@ -174,7 +174,7 @@ export function writeDoc(run: RunFigures): string {
 
   r.heading(`Pages at ${CONNECTIONS} connections, beside the trivial route`);
   r.para(
-    `autocannon, signed in as the stand's owner, ${CONNECTIONS} connections, a few seconds a run (a route slower than a fifth of a second a request is sent ${CONNECTIONS * 2} requests instead, so its slowest answers are counted). The floor is \`GET ${TRIVIAL}\` of the same app with the same cookie, measured the same way just before each page. Tree pages cycle through 200 trees spread over the stand.\n`,
+    `autocannon, signed in as the stand's owner, ${CONNECTIONS} connections, a few seconds a run (a route whose single request takes more than a twentieth of the run is sent one request per connection instead, so its slowest answers are counted, and on as many connections as it can answer within 30 s). The floor is \`GET ${TRIVIAL}\` of the same app with the same cookie, measured the same way just before each page. Tree pages cycle through 200 trees spread over the stand.\n`,
   );
   r.table(
     [
