@@ -154,6 +154,7 @@ async function benchStand(trees: number, browser: Browser | null): Promise<Stand
       measurementsCount: cached.measurements,
       tapholesCount: cached.tapholes,
       generatedS: cached.generatedS,
+      writtenInS: cached.writtenInS,
       serverReadyS: server.readyS,
       stored,
       warmMs,

@@ -199,6 +199,8 @@ export interface CachedStand {
   standId: number;
   /** Seconds spent writing it in this run, or null when it came from the cache. */
   generatedS: number | null;
+  /** Seconds it took to write when it was written (this run or an earlier one). */
+  writtenInS: number | null;
   measurements: number;
   tapholes: number;
 }
@@ -239,8 +241,15 @@ export async function syntheticStandFile(opts: StandOptions): Promise<CachedStan
       sqlite.close();
     }
     for (const suffix of ['-wal', '-shm']) fs.rmSync(partial + suffix, { force: true });
-    fs.renameSync(partial, file);
     generatedS = (performance.now() - t0) / 1000;
+    fs.writeFileSync(`${file}.json`, JSON.stringify({ writtenInS: generatedS }));
+    fs.renameSync(partial, file);
+  }
+  let writtenInS: number | null = generatedS;
+  try {
+    writtenInS ??= JSON.parse(fs.readFileSync(`${file}.json`, 'utf8')).writtenInS;
+  } catch {
+    // written before the time was kept beside it
   }
 
   const sqlite = new Database(file, { readonly: true });
@@ -249,6 +258,7 @@ export async function syntheticStandFile(opts: StandOptions): Promise<CachedStan
     return {
       file,
       generatedS,
+      writtenInS,
       standId: count("select id from sugarbushes where name = 'Bench Stand'"),
       measurements: count('select count(*) from measurements'),
       tapholes: count('select count(*) from tapholes'),
