@@ -1,35 +1,52 @@
 import { z } from 'zod';
-import type { VerdictKey, WarningCode } from '../rules/index';
+import { verdicts } from '../rules/verdicts';
+import { warningCodes } from '../rules/warnings';
 import type { DistanceSummary } from '../geo/nearest-neighbour';
-import type { Species, TreeStatus } from './enums';
+import { species, treeStatuses } from './enums';
 import { adviceQuerySchema } from './plan';
 
 /** `?season=` for the map and the stand figures; the upcoming season when left out. */
 export const mapQuerySchema = adviceQuerySchema;
 export type MapQuery = z.output<typeof mapQuerySchema>;
 
-/** One tree as the map draws it: where it stands and what the advisor says for the season. */
-export interface MapTree {
-  id: number;
-  tag: string;
-  lat: number | null;
-  lng: number | null;
-  species: Species;
-  status: TreeStatus;
-  /** Latest standing DBH, cm. */
-  dbhCm: number | null;
-  verdict: VerdictKey;
-  taps: number;
-  placements: { azimuthDeg: number; heightCm: number }[];
-  /** Warning codes only; the tree's advice has the messages. */
-  warnings: WarningCode[];
-  /** Mapped outside the stand's boundary (false when there is no boundary or no position). */
-  outside: boolean;
-}
+/** Decimals of degree the map sends: 6 is about 0.1 m on the ground, well inside a GPS fix. */
+export const MAP_COORD_DECIMALS = 6;
 
-export interface MapResponse {
+/**
+ * The codes of the map's coded columns, in index order: `verdict[i]` is an index into
+ * `codes.verdict`, bit `b` of `warnings[i]` stands for `codes.warning[b]`. The answer carries
+ * them, so a page built before a code was added still reads a newer answer.
+ */
+export const mapCodes = {
+  verdict: verdicts.map((v) => v.key),
+  warning: [...warningCodes],
+  status: [...treeStatuses],
+  species: [...species],
+};
+export type MapCodes = typeof mapCodes;
+
+/**
+ * Every tree of a stand as the map draws it, column by column: the i-th entry of each array
+ * is the same tree, in tag order. Only what the map, its legend and its filters need; the
+ * tree card asks for a tree's details when it is chosen.
+ */
+export interface MapColumns {
   season: number;
-  trees: MapTree[];
+  count: number;
+  codes: MapCodes;
+  ids: number[];
+  tags: string[];
+  /** Degrees, rounded to MAP_COORD_DECIMALS; null where the tree has no position. */
+  lat: (number | null)[];
+  lng: (number | null)[];
+  verdict: number[];
+  taps: number[];
+  /** The warnings of each tree as a bitmask over `codes.warning`. */
+  warnings: number[];
+  status: number[];
+  species: number[];
+  /** 1 where the tree is mapped outside the stand's boundary. */
+  outside: (0 | 1)[];
 }
 
 /**

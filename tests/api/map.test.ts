@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PROBLEM_TAGS } from '../../seeds/01_demo';
 import { seedDemoIfEmpty } from '../../server/scripts/seed-demo';
 import { upcomingSeason } from '../../shared/schemas/plan';
+import type { MapColumns } from '../../shared/schemas/map';
 import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 /** Degrees of arc for metres on turf's sphere (R = 6 371 008.8 m). */
@@ -21,6 +22,22 @@ const hectare = {
   ],
 };
 const at = (xM: number, yM: number) => ({ lng: deg(xM), lat: deg(yM) });
+
+/** The map's columns read back as one object per tree, by the codes the answer carries. */
+function treesOf(body: MapColumns) {
+  return body.ids.map((id, i) => ({
+    id,
+    tag: body.tags[i],
+    lat: body.lat[i],
+    lng: body.lng[i],
+    verdict: body.codes.verdict[body.verdict[i]],
+    taps: body.taps[i],
+    warnings: body.codes.warning.filter((_, bit) => (body.warnings[i] & (1 << bit)) !== 0),
+    status: body.codes.status[body.status[i]],
+    species: body.codes.species[body.species[i]],
+    outside: body.outside[i] === 1,
+  }));
+}
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
@@ -66,8 +83,9 @@ describe('the map of a stand without a boundary', () => {
     const res = await tapper.agent.get(`/api/sugarbushes/${team.standId}/map`);
     expect(res.status).toBe(200);
     expect(res.body.season).toBe(upcomingSeason());
-    expect(res.body.trees).toHaveLength(7);
-    expect(res.body.trees.every((x: { outside: boolean }) => !x.outside)).toBe(true);
+    expect(res.body.count).toBe(7);
+    expect(treesOf(res.body)).toHaveLength(7);
+    expect(res.body.outside).toEqual([0, 0, 0, 0, 0, 0, 0]);
   });
 
   it('when the figures are asked for, then the area and per-area figures are null', async () => {
@@ -135,37 +153,50 @@ describe('the map and figures of a stand with a boundary', () => {
   it('when the map is asked for a season, then each tree carries its advice and the one beyond the line is outside', async () => {
     const res = await tapper.agent.get(`/api/sugarbushes/${team.standId}/map?season=2027`);
     expect(res.body.season).toBe(2027);
-    const byTag = Object.fromEntries(
-      res.body.trees.map((x: { tag: string }) => [x.tag, x]),
-    ) as Record<string, Record<string, unknown>>;
-    expect(Object.keys(byTag).sort()).toEqual(['M-1', 'M-2', 'M-3', 'M-4', 'M-5', 'M-6', 'T-001']);
+    const byTag = Object.fromEntries(treesOf(res.body).map((x) => [x.tag, x]));
+    expect(res.body.tags).toEqual(['M-1', 'M-2', 'M-3', 'M-4', 'M-5', 'M-6', 'T-001']);
     expect(byTag['M-6'].outside).toBe(true);
     expect(['M-1', 'M-5', 'T-001'].map((tag) => byTag[tag].outside)).toEqual([false, false, false]);
     expect(byTag['M-1']).toMatchObject({
       id: ids['M-1'],
-      dbhCm: 36,
+      lat: Math.round(at(10, 50).lat * 1e6) / 1e6,
+      lng: Math.round(at(10, 50).lng * 1e6) / 1e6,
       species: 'sugar-maple',
       status: 'active',
+      verdict: 'tap',
     });
     expect(byTag['T-001']).toMatchObject({
       lat: null,
       lng: null,
-      dbhCm: null,
       verdict: 'unmeasured',
       taps: 0,
+      warnings: ['no-measurement'],
     });
-    expect(byTag['M-5']).toMatchObject({ verdict: 'retired', taps: 0 });
-    const m1 = byTag['M-1'] as { taps: number; placements: unknown[]; warnings: unknown[] };
-    expect(m1.taps).toBeGreaterThan(0);
-    expect(m1.placements.length).toBeLessThanOrEqual(m1.taps);
-    expect(m1.warnings.every((w) => typeof w === 'string')).toBe(true);
+    expect(byTag['M-5']).toMatchObject({ verdict: 'retired', taps: 0, status: 'dead' });
+    expect(byTag['M-1'].taps).toBeGreaterThan(0);
+    // What the card shows on demand is not sent for every tree.
+    expect(Object.keys(res.body).sort()).toEqual(
+      [
+        'codes',
+        'count',
+        'ids',
+        'lat',
+        'lng',
+        'outside',
+        'season',
+        'species',
+        'status',
+        'tags',
+        'taps',
+        'verdict',
+        'warnings',
+      ].sort(),
+    );
   });
 
   it('when the figures are asked for, then they count the trees inside one hectare', async () => {
     const map = await tapper.agent.get(`/api/sugarbushes/${team.standId}/map?season=2027`);
-    const taps = Object.fromEntries(
-      map.body.trees.map((x: { tag: string; taps: number }) => [x.tag, x.taps]),
-    );
+    const taps = Object.fromEntries(treesOf(map.body).map((x) => [x.tag, x.taps]));
     const res = await tapper.agent.get(`/api/sugarbushes/${team.standId}/figures?season=2027`);
     expect(res.status).toBe(200);
     const f = res.body;
@@ -217,10 +248,10 @@ describe('the demo stand on the map', () => {
   it('shows every tree of the register and flags exactly the trees mapped outside the boundary', async () => {
     const res = await forester.agent.get(`/api/sugarbushes/${standId}/map?season=2027`);
     const [{ n }] = await demo.db('trees').where({ sugarbush_id: standId }).count({ n: '*' });
-    expect(res.body.trees).toHaveLength(Number(n));
-    const outside = res.body.trees
-      .filter((x: { outside: boolean }) => x.outside)
-      .map((x: { tag: string }) => x.tag);
+    expect(res.body.count).toBe(Number(n));
+    const outside = treesOf(res.body)
+      .filter((x) => x.outside)
+      .map((x) => x.tag);
     expect(outside).toEqual(DEMO_PROBLEM_TAGS['outside-boundary']);
   });
 

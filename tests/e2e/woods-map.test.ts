@@ -88,7 +88,9 @@ describe('the woods map in a real browser', () => {
     const api = await context.request.get(
       `${server.url}/api/sugarbushes/${standId}/map?season=2027`,
     );
-    expect((await api.json()).trees).toHaveLength(treeTotal);
+    const columns = await api.json();
+    expect(columns.count).toBe(treeTotal);
+    expect(columns.ids).toHaveLength(treeTotal);
     const counts = await legend.locator('[data-testid^="legend-count-"]').allTextContents();
     expect(counts.reduce((sum, c) => sum + Number(c.replace(/,/g, '')), 0)).toBe(treeTotal);
 
@@ -106,6 +108,10 @@ describe('the woods map in a real browser', () => {
     await page.mouse.click(box.x + box.width / 2, box.y + box.height / 2);
     await card.first().waitFor();
     await expect.poll(() => card.first().getByRole('link').count()).toBeGreaterThan(0);
+    // The DBH and where to drill come with the card, asked for when the tree is chosen.
+    await expect
+      .poll(() => card.first().locator('dt:text-is("DBH") + dd').textContent())
+      .toMatch(/^\d+(\.\d)? (cm|in)$/);
     expect([...hosts].filter((h) => !local(h))).toEqual([]);
     await context.close();
   });
@@ -182,6 +188,35 @@ describe('the woods map in a real browser', () => {
     ).toBe(true);
     expect(await page.locator('.leaflet-tile').count()).toBe(0);
     expect([...asked].filter((h) => !local(h))).toEqual([]);
+    await context.close();
+  });
+
+  it('opened again with nothing changed, the map is confirmed by its tag and not sent again', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await openMap(context);
+    const legend = page.getByRole('region', { name: 'Legend' });
+    await legend
+      .getByRole('heading', { name: `${treeTotal.toLocaleString('en-US')} trees` })
+      .waitFor();
+    const answers: { status: number; tag?: string; size: number }[] = [];
+    page.on('requestfinished', async (req) => {
+      if (new URL(req.url()).pathname !== `/api/sugarbushes/${standId}/map`) return;
+      const res = await req.response();
+      answers.push({
+        status: res?.status() ?? 0,
+        tag: (await req.allHeaders())['if-none-match'],
+        size: (await req.sizes()).responseBodySize,
+      });
+    });
+    await page.reload();
+    await legend
+      .getByRole('heading', { name: `${treeTotal.toLocaleString('en-US')} trees` })
+      .waitFor();
+    await expect.poll(() => answers.length).toBe(1);
+    const current = await context.request.get(`${server.url}/api/sugarbushes/${standId}/map`);
+    // The browser sent the tag of the copy it holds, and the server answered without a body.
+    expect(answers[0].tag).toBe(current.headers()['etag']);
+    expect(answers[0].size).toBe(0);
     await context.close();
   });
 });

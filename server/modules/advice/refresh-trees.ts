@@ -68,3 +68,8 @@ export async function guidelineChanged(trx: Knex.Transaction, sugarbushId: numbe
   await trx('sugarbushes').where({ id: sugarbushId }).increment('advice_version', 1);
   await trx('sugarbushes').where({ id: sugarbushId }).increment('record_seq', 1);
 }
+
+/** The boundary changed: advice stays, but what is derived from the stand (the map) is older. */
+export async function boundaryChanged(trx: Knex.Transaction, sugarbushId: number): Promise<void> {
+  await trx('sugarbushes').where({ id: sugarbushId }).increment('record_seq', 1);
+}

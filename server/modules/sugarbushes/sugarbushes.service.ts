@@ -5,7 +5,7 @@ import { auditRepository } from '../audit/audit.repository';
 import { membersRepository } from '../members/members.repository';
 import type { ListQuery, Page } from '../../../shared/schemas/list-query';
 import type { Sugarbush } from '../../../shared/schemas/sugarbush';
-import { guidelineChanged } from '../advice/refresh-trees';
+import { boundaryChanged, guidelineChanged } from '../advice/refresh-trees';
 import { profileColumns } from './profile-choice';
 import { sugarbushesRepository } from './sugarbushes.repository';
 import type { z } from 'zod';
@@ -66,6 +66,7 @@ export function sugarbushesService(ctx: AppContext) {
       await ctx.db.transaction(async (trx) => {
         if (Object.keys(row).length > 0) await sugarbushesRepository(trx).update(id, row);
         if (changesAdvice) await guidelineChanged(trx, id);
+        else if ('boundary' in row) await boundaryChanged(trx, id);
         await auditRepository(trx).record({
           sugarbushId: id,
           userId,

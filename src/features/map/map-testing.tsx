@@ -5,33 +5,31 @@ import { meAs, page, sugarbush } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
 import type { Role } from '@shared/schemas/enums';
 import type { Sugarbush } from '@shared/schemas/sugarbush';
-import type { MapTree } from '@shared/schemas/map';
-
-export const mapTree = (overrides: Partial<MapTree>): MapTree => ({
-  id: 1,
-  tag: '0001',
-  lat: 44.3127,
-  lng: -72.6418,
-  species: 'sugar-maple',
-  status: 'active',
-  dbhCm: 45.72,
-  verdict: 'tap',
-  taps: 2,
-  placements: [
-    { azimuthDeg: 180, heightCm: 110 },
-    { azimuthDeg: 0, heightCm: 80 },
-  ],
-  warnings: [],
-  outside: false,
-  ...overrides,
-});
+import type { MapTree } from './lib/map-stand';
+import { columnsOf, mapTree, treeAdviceOf, treeRecordOf } from './map-fixtures';
 
 export const trees: MapTree[] = [
   mapTree({ id: 1, tag: '0412', warnings: ['slow-growth'] }),
-  mapTree({ id: 2, tag: '0007', verdict: 'rest', taps: 0, placements: [] }),
-  mapTree({ id: 3, tag: '0100', verdict: 'too-small', taps: 0, placements: [], dbhCm: 20 }),
+  mapTree({ id: 2, tag: '0007', verdict: 'rest', taps: 0 }),
+  mapTree({ id: 3, tag: '0100', verdict: 'too-small', taps: 0 }),
   mapTree({ id: 4, tag: '0050', verdict: 'tap', lat: null, lng: null }),
 ];
+
+/** What the card asks for when a tree is chosen: its record and its advice (where to drill). */
+export const cardRoutes = {
+  'GET /api/trees/1': treeRecordOf(trees[0]),
+  'GET /api/trees/1/advice': treeAdviceOf(trees[0], {
+    dbhCm: 45.72,
+    placements: [
+      { azimuthDeg: 180, heightCm: 110 },
+      { azimuthDeg: 0, heightCm: 80 },
+    ],
+  }),
+  'GET /api/trees/2': treeRecordOf(trees[1]),
+  'GET /api/trees/2/advice': treeAdviceOf(trees[1]),
+  'GET /api/trees/3': treeRecordOf(trees[2], { latestDbhCm: 20 }),
+  'GET /api/trees/3/advice': treeAdviceOf(trees[2], { dbhCm: 20 }),
+};
 
 export const figures = {
   boundary: true,
@@ -62,10 +60,11 @@ export function openMap({
   const api = mockApi({
     'GET /api/auth/me': meAs(role, unitSystem),
     'GET /api/sugarbushes/3': sugarbush({ role, ...bush }),
-    'GET /api/sugarbushes/3/map': { season: 2027, trees: stand },
+    'GET /api/sugarbushes/3/map': columnsOf(stand),
     'GET /api/sugarbushes/3/figures': figures,
     'GET /api/sugarbushes/3/basemaps': page([]),
     'GET /tiles/owl-ledge/tiles.json': json(404),
+    ...cardRoutes,
     ...routes,
   });
   const view = renderPage({ path: '/sugarbushes/:id/map', url, element: <WoodsMapRoute /> });

@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { json } from '@/test/api-mock';
-import { mapTree, openMap, params } from './map-testing';
+import { mapTree } from './map-fixtures';
+import { cardRoutes, openMap, params } from './map-testing';
 
 // jsdom has no canvas, so Leaflet stays out: see the stand-in.
 vi.mock('./components/map-view', () => import('./map-view-stand-in'));
@@ -34,10 +35,11 @@ describe('the woods map', () => {
     await user.click(await screen.findByRole('button', { name: 'Marker 0412' }));
     const card = await screen.findByRole('region', { name: 'Tree 0412' });
     expect(params(router).get('tree')).toBe('1');
-    expect(within(card).getByText('18.0 in')).toBeInTheDocument();
+    expect(await within(card).findByText('18.0 in')).toBeInTheDocument();
+    expect(within(card).getByText('Oct 3, 2026')).toBeInTheDocument();
     expect(within(card).getByText('Tap')).toBeInTheDocument();
     expect(within(card).getByText('Tap 2 times')).toBeInTheDocument();
-    const where = within(card).getByRole('list', { name: 'Where to drill' });
+    const where = await within(card).findByRole('list', { name: 'Where to drill' });
     expect(
       within(where)
         .getAllByRole('listitem')
@@ -48,6 +50,55 @@ describe('the woods map', () => {
       'href',
       '/trees/1',
     );
+  });
+
+  it("when a tree is chosen, then the card shows the map's advice at once and only then asks for the tree and its advice for the map's season, saying it is loading", async () => {
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    const { api, user } = openMap({
+      routes: {
+        'GET /api/trees/1/advice': async () => {
+          await held;
+          return { status: 200, body: cardRoutes['GET /api/trees/1/advice'] };
+        },
+      },
+    });
+    const marker = await screen.findByRole('button', { name: 'Marker 0412' });
+    expect(api.to('GET /api/trees/1')).toHaveLength(0);
+    expect(api.to('GET /api/trees/1/advice')).toHaveLength(0);
+
+    await user.click(marker);
+    const card = await screen.findByRole('region', { name: 'Tree 0412' });
+    expect(within(card).getByText('Tap 2 times')).toBeInTheDocument();
+    expect(within(card).getByText('Slow growth')).toBeInTheDocument();
+    expect(within(card).getByRole('status')).toHaveTextContent('Loading the tree’s details…');
+    expect(within(card).queryByRole('list', { name: 'Where to drill' })).not.toBeInTheDocument();
+    await waitFor(() => expect(api.to('GET /api/trees/1/advice')).toHaveLength(1));
+    expect(api.to('GET /api/trees/1/advice')[0].url.searchParams.get('season')).toBe('2027');
+    expect(api.to('GET /api/trees/1')).toHaveLength(1);
+    expect(api.to('GET /api/trees/2/advice')).toHaveLength(0);
+
+    release();
+    const where = await within(card).findByRole('list', { name: 'Where to drill' });
+    expect(within(where).getAllByRole('listitem')).toHaveLength(2);
+    expect(within(card).getByText('45.7 cm')).toBeInTheDocument();
+    expect(within(card).queryByRole('status')).not.toBeInTheDocument();
+  });
+
+  it("when a tree's details cannot be loaded, then the card says so and a retry asks again", async () => {
+    const { api, user } = openMap({
+      routes: {
+        'GET /api/trees/1/advice': json(500, { error: { code: 'x', message: 'Disk full' } }),
+      },
+    });
+    await user.click(await screen.findByRole('button', { name: 'Marker 0412' }));
+    const card = await screen.findByRole('region', { name: 'Tree 0412' });
+    const alert = await within(card).findByRole('alert');
+    expect(alert).toHaveTextContent('We couldn’t load this tree’s details.');
+    expect(within(card).getByText('Tap 2 times')).toBeInTheDocument();
+    await user.click(within(alert).getByRole('button', { name: 'Retry' }));
+    await waitFor(() => expect(api.to('GET /api/trees/1/advice')).toHaveLength(2));
+    expect(api.to('GET /api/trees/1')).toHaveLength(1);
   });
 
   it('when a tag is found, then that tree is chosen; arrow keys step on in tag order; Esc closes the card', async () => {

@@ -3,7 +3,7 @@ import type { Tree } from '@shared/schemas/tree';
 import { treeKeys } from '@/features/trees/api/tree-keys';
 import { api } from '@/lib/api-client';
 import { mapKeys } from './map-keys';
-import type { MapResponse } from '@shared/schemas/map';
+import type { MapColumns } from '@shared/schemas/map';
 
 export interface MoveTreeInput {
   treeId: number;
@@ -20,13 +20,17 @@ export function useMoveTree(sugarbushId: number) {
   return useMutation({
     mutationFn: moveTree,
     onSuccess: (_tree, { treeId, lat, lng }) => {
-      queryClient.setQueriesData<MapResponse>(
+      queryClient.setQueriesData<MapColumns>(
         { queryKey: [...mapKeys.all, 'trees', sugarbushId] },
-        (data) =>
-          data && {
+        (data) => {
+          const at = data?.ids.indexOf(treeId) ?? -1;
+          if (!data || at === -1) return data;
+          return {
             ...data,
-            trees: data.trees.map((t) => (t.id === treeId ? { ...t, lat, lng } : t)),
-          },
+            lat: data.lat.with(at, lat),
+            lng: data.lng.with(at, lng),
+          };
+        },
       );
     },
     onSettled: (_tree, _error, { treeId }) =>

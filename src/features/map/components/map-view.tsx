@@ -4,7 +4,7 @@ import { useMemo, type Ref } from 'react';
 import { AttributionControl, MapContainer, ScaleControl } from 'react-leaflet';
 import type { Boundary } from '@shared/schemas/sugarbush';
 import { colors } from '@/lib/theme';
-import type { MapTree } from '@shared/schemas/map';
+import type { MappedTree } from '../lib/map-stand';
 import type { Position } from '../lib/use-geolocation';
 import { BackgroundLayer, MAX_MAP_ZOOM, type Background } from './background-layer';
 import { BoundaryLayer } from './boundary-layer';
@@ -15,7 +15,7 @@ import { TreeLayer } from './tree-layer';
 
 export interface MapViewProps {
   mapRef: Ref<L.Map>;
-  trees: readonly (MapTree & { lat: number; lng: number })[];
+  trees: readonly MappedTree[];
   selectedId: number | undefined;
   onSelect: (treeId: number) => void;
   onClear: () => void;

@@ -5,10 +5,10 @@ import type { Tree } from '@shared/schemas/tree';
 import { EmptyState } from '@/components/ui/empty-state';
 import { can, useRole } from '@/lib/auth';
 import { useUnitSystem } from '@/lib/units';
-import type { MapResponse } from '@shared/schemas/map';
 import { initialView } from '../lib/initial-view';
 import { countLegend } from '../lib/legend-counts';
-import { findByTag, hasFilters, isMapped, stepFrom, visibleTrees } from '../lib/map-filters';
+import { findByTag, hasFilters, stepFrom, visibleTrees } from '../lib/map-filters';
+import { isMapped, type MapStand } from '../lib/map-stand';
 import { useGeolocation } from '../lib/use-geolocation';
 import { useMapParams } from '../lib/use-map-params';
 import { AddTreeForm } from './add-tree-form';
@@ -44,7 +44,7 @@ function MapLoading() {
 
 interface MapWorkspaceProps {
   sugarbushId: number;
-  data: MapResponse;
+  data: MapStand;
   sugarbush: Sugarbush;
 }
 
@@ -66,10 +66,9 @@ export function MapWorkspace({ sugarbushId, data, sugarbush }: MapWorkspaceProps
   const region = useRef<HTMLDivElement>(null);
   const mapBox = useRef<HTMLDivElement>(null);
 
-  const trees = data.trees;
-  const shown = useMemo(() => visibleTrees(trees, filters), [trees, filters]);
+  const { trees, mapped: mappedAll, byId } = data;
+  const shown = useMemo(() => visibleTrees(mappedAll, filters), [mappedAll, filters]);
   const counts = useMemo(() => countLegend(trees, filters), [trees, filters]);
-  const mappedAll = useMemo(() => trees.filter(isMapped), [trees]);
   const view = useMemo(
     () => initialView(mappedAll, sugarbush.boundary),
     // The first view only; later edits pan through the map itself.
@@ -77,14 +76,14 @@ export function MapWorkspace({ sugarbushId, data, sugarbush }: MapWorkspaceProps
     [],
   );
   const backgrounds = useBackground(sugarbushId, mappedAll);
-  const selected = trees.find((t) => t.id === selectedId);
+  const selected = selectedId === undefined ? undefined : byId.get(selectedId);
   const shownIndex = shown.findIndex((t) => t.id === selectedId);
 
   const choose = useCallback(
     (treeId: number | undefined, pan = false) => {
       move.cancel();
       select(treeId);
-      const tree = trees.find((t) => t.id === treeId);
+      const tree = treeId === undefined ? undefined : byId.get(treeId);
       if (!tree || !isMapped(tree)) return;
       // On a phone the card covers the lower map: bring the map up and the tree above the card.
       const upper = cardIsSheet();
@@ -98,7 +97,7 @@ export function MapWorkspace({ sugarbushId, data, sugarbush }: MapWorkspaceProps
           seq: (f?.seq ?? 0) + 1,
         }));
     },
-    [move, select, trees],
+    [move, select, byId],
   );
   const step = useCallback(
     (direction: 1 | -1) => {
@@ -151,6 +150,7 @@ export function MapWorkspace({ sugarbushId, data, sugarbush }: MapWorkspaceProps
   ) : selected ? (
     <TreeCard
       tree={selected}
+      season={data.season}
       unit={unit}
       canEdit={canEdit}
       move={move.moving?.treeId === selected.id ? move.state : null}

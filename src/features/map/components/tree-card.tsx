@@ -5,9 +5,10 @@ import { paths } from '@/config/paths';
 import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningChip } from '@/features/advice/components/warning-chip';
 import { TreeStatusLabel } from '@/features/trees/components/tree-status';
-import { formatDbh, type LengthUnit } from '@/lib/units';
-import type { MapTree } from '@shared/schemas/map';
-import { describePlacement } from '../lib/compass';
+import type { LengthUnit } from '@/lib/units';
+import { useTreeDetails } from '../api/get-tree-details';
+import type { MapTree } from '../lib/map-stand';
+import { TreeCardDetails, TreeCardFigures } from './tree-card-details';
 
 export interface MoveState {
   /** The marker has been dropped somewhere new and waits for a yes or no. */
@@ -18,6 +19,8 @@ export interface MoveState {
 
 interface TreeCardProps {
   tree: MapTree;
+  /** The season the map shows: the card's advice is for the same one. */
+  season: number;
   unit: LengthUnit;
   canEdit: boolean;
   move: MoveState | null;
@@ -31,9 +34,14 @@ function tapsLine(tree: MapTree): string {
   return tree.taps === 1 ? 'Tap once' : `Tap ${tree.taps} times`;
 }
 
-/** One tree at a glance: what it is, what to do with it this season, and where to drill. */
+/**
+ * One tree at a glance: what it is, what to do with it this season, and where to drill. What
+ * the map already has shows at once; the DBH, the last measurement and the placements are
+ * asked for when the tree is chosen.
+ */
 export function TreeCard({
   tree,
+  season,
   unit,
   canEdit,
   move,
@@ -42,6 +50,7 @@ export function TreeCard({
   onMoveSave,
 }: TreeCardProps) {
   const mapped = tree.lat !== null && tree.lng !== null;
+  const details = useTreeDetails(tree.id, season);
   return (
     <section
       aria-label={`Tree ${tree.tag}`}
@@ -60,8 +69,7 @@ export function TreeCard({
         <dd>
           <TreeStatusLabel status={tree.status} />
         </dd>
-        <dt className="font-bold">DBH</dt>
-        <dd className="tabular-nums">{formatDbh(tree.dbhCm, unit)}</dd>
+        <TreeCardFigures details={details} unit={unit} />
         <dt className="font-bold">Advice</dt>
         <dd>
           <VerdictBadge verdict={tree.verdict} />
@@ -69,13 +77,7 @@ export function TreeCard({
       </dl>
 
       <p className="mt-3 font-bold">{tapsLine(tree)}</p>
-      {tree.placements.length > 0 && (
-        <ul aria-label="Where to drill" className="mt-1 list-disc pl-5 text-sm tabular-nums">
-          {tree.placements.map((p, i) => (
-            <li key={i}>{describePlacement(p, unit)}</li>
-          ))}
-        </ul>
-      )}
+      <TreeCardDetails details={details} tapped={tree.taps > 0} unit={unit} />
 
       {tree.warnings.length > 0 && (
         <ul aria-label="Warnings" className="mt-3 flex flex-wrap gap-1.5">

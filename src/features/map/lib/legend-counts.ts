@@ -1,6 +1,6 @@
 import type { VerdictKey } from '@shared/rules/verdicts';
-import type { MapTree } from '@shared/schemas/map';
-import { isMapped, matches, type MapFilters } from './map-filters';
+import { matches, type MapFilters } from './map-filters';
+import { isMapped, type MapTree } from './map-stand';
 import { verdictStyles } from './verdict-style';
 
 export interface LegendCounts {

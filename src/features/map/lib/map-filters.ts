@@ -6,7 +6,7 @@ import {
   type Species,
   type TreeStatus,
 } from '@shared/schemas/enums';
-import type { MapTree } from '@shared/schemas/map';
+import type { MapTree, MappedTree } from './map-stand';
 
 export interface MapFilters {
   species?: Species;
@@ -53,18 +53,16 @@ export function matches(tree: MapTree, filters: MapFilters): boolean {
   return true;
 }
 
-export const isMapped = (tree: MapTree): tree is MapTree & { lat: number; lng: number } =>
-  tree.lat !== null && tree.lng !== null;
-
-const tagOrder = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
-export const byTag = (a: { tag: string }, b: { tag: string }) => tagOrder.compare(a.tag, b.tag);
-
-/** The trees the map shows for these filters, in tag order (the order arrow keys step through). */
-export function visibleTrees(trees: readonly MapTree[], filters: MapFilters) {
-  return trees.filter((t) => isMapped(t) && matches(t, filters)).sort(byTag) as (MapTree & {
-    lat: number;
-    lng: number;
-  })[];
+/**
+ * The trees the map shows for these filters, in the order given: a decoded stand's `mapped`
+ * trees are in tag order, the order arrow keys step through. No filter, no copy.
+ */
+export function visibleTrees(
+  mapped: readonly MappedTree[],
+  filters: MapFilters,
+): readonly MappedTree[] {
+  if (!hasFilters(filters)) return mapped;
+  return mapped.filter((t) => matches(t, filters));
 }
 
 /** The next (or previous) tree from the current one, wrapping round; the first when none is chosen. */

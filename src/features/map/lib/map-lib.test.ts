@@ -1,4 +1,4 @@
-import type { MapTree } from '@shared/schemas/map';
+import { columnsOf, mapTree as treeOf } from '../map-fixtures';
 import {
   availableBackground,
   boundsOf,
@@ -11,23 +11,12 @@ import { parseBoundary, parseBoundaryText } from './geojson-boundary';
 import { gridLines, gridStepM } from './grid';
 import { countLegend } from './legend-counts';
 import { filtersFromParams, findByTag, stepFrom, visibleTrees, withFilters } from './map-filters';
+import { decodeMapStand, type MapTree } from './map-stand';
 import { markerRadius, showsLetters, verdictStyles } from './verdict-style';
 
 const at = (lat: number | null, lng: number | null) => ({ lat, lng });
-const mapTree = (overrides: Partial<MapTree> = {}): MapTree => ({
-  id: 1,
-  tag: '0001',
-  ...at(44.31, -72.64),
-  species: 'sugar-maple',
-  status: 'active',
-  dbhCm: 40,
-  verdict: 'tap',
-  taps: 1,
-  placements: [{ azimuthDeg: 180, heightCm: 110 }],
-  warnings: [],
-  outside: false,
-  ...overrides,
-});
+const mapTree = (overrides: Partial<MapTree> = {}): MapTree =>
+  treeOf({ ...at(44.31, -72.64), taps: 1, ...overrides });
 
 const stand: MapTree[] = [
   mapTree({ id: 1, tag: '10', verdict: 'tap' }),
@@ -88,9 +77,11 @@ describe('the map filters in the URL', () => {
 
 describe('stepping through the trees', () => {
   it('goes in tag order, numbers by value, skips unmapped trees and wraps round', () => {
-    const order = visibleTrees(stand, {}).map((t) => t.tag);
+    const { mapped } = decodeMapStand(columnsOf(stand));
+    const order = visibleTrees(mapped, {}).map((t) => t.tag);
     expect(order).toEqual(['2', '0003', '4', '10']);
-    const trees = visibleTrees(stand, {});
+    expect(visibleTrees(mapped, { verdict: 'tap' }).map((t) => t.tag)).toEqual(['2', '10']);
+    const trees = visibleTrees(mapped, {});
     expect(stepFrom(trees, undefined, 1)?.tag).toBe('2');
     expect(stepFrom(trees, undefined, -1)?.tag).toBe('10');
     expect(stepFrom(trees, 1, 1)?.tag).toBe('2');

@@ -1,5 +1,6 @@
 import type { Species, TreeStatus } from '@shared/schemas/enums';
 import { queryRoots } from '@/lib/query-roots';
+import { treeDetailKeys } from '@/lib/tree-detail-keys';
 
 export type TreeSort =
   'tag' | '-tag' | 'dbh' | '-dbh' | 'status' | '-status' | 'species' | '-species';
@@ -19,6 +20,6 @@ export const treeKeys = {
   lists: () => [...treeKeys.all, 'list'] as const,
   list: (sugarbushId: number, filters: TreeListFilters) =>
     [...treeKeys.lists(), sugarbushId, filters] as const,
-  details: () => [...treeKeys.all, 'detail'] as const,
-  detail: (treeId: number) => [...treeKeys.details(), treeId] as const,
+  details: treeDetailKeys.all,
+  detail: treeDetailKeys.tree,
 };
