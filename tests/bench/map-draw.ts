@@ -2,30 +2,17 @@
  * The woods map at scale, in headless Chromium: how long a large stand takes to fetch and draw,
  * and how smoothly the map pans once it is drawn. Figures only; nothing here asserts a time.
  */
-import { spawnSync } from 'node:child_process';
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import type { Browser, Page } from 'playwright-core';
-import { DEMO_PASSWORD } from '../../seeds/01_demo';
-import { startServer } from '../../server/index';
-import { seedDemoIfEmpty } from '../../server/scripts/seed-demo';
-import { upcomingSeason } from '../../shared/schemas/plan';
-import { launchBrowser, recordHosts, signInAs } from '../e2e/harness';
-import { writeStandOwner, writeSyntheticStand } from './synthetic-stand';
+import { recordHosts, signInAs } from '../e2e/harness';
+import { DRAW_MARK } from './bundle';
 
-const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const VIEWPORT = { width: 1280, height: 800 };
 const FRAME_MS = 1000 / 60;
 const LONG_FRAME_MS = 50;
 const DRAG = { dx: 480, dy: 200, steps: 60, ms: 2000 };
 const AFTER_RELEASE_MS = 1200;
 const DRAW_TIMEOUT_MS = 120_000;
-const BENCH_OWNER = 'bench-owner@stand.example';
-const DEMO_OWNER = 'owner@fernside.example';
-const MARK = 'clearwood:trees-drawn';
-const RUNS = Math.max(1, Number(process.env.BENCH_MAP_RUNS ?? 2) || 1);
+const MARK = DRAW_MARK;
 
 /** What the page records about itself; installed before any of its own scripts run. */
 interface Probe {
@@ -87,46 +74,6 @@ function startFrames(maxMs: number) {
   requestAnimationFrame(tick);
 }
 
-/** Builds the client when dist/ is missing, older than the sources, or lacks the draw signal. */
-export function ensureClientBuilt() {
-  const index = path.join(root, 'dist', 'index.html');
-  const newest = (dir: string): number =>
-    fs
-      .readdirSync(dir, { withFileTypes: true })
-      .reduce(
-        (m, e) =>
-          Math.max(
-            m,
-            e.isDirectory()
-              ? newest(path.join(dir, e.name))
-              : fs.statSync(path.join(dir, e.name)).mtimeMs,
-          ),
-        0,
-      );
-  const assets = path.join(root, 'dist', 'assets');
-  const stale =
-    !fs.existsSync(index) ||
-    Math.max(newest(path.join(root, 'src')), newest(path.join(root, 'shared'))) >
-      fs.statSync(index).mtimeMs ||
-    !fs.existsSync(assets) ||
-    !fs
-      .readdirSync(assets)
-      .some(
-        (f) => f.endsWith('.js') && fs.readFileSync(path.join(assets, f), 'utf8').includes(MARK),
-      );
-  if (!stale) return;
-  console.log('Building the client (vite build)…');
-  const built = spawnSync('npx', ['vite', 'build', '--logLevel', 'error'], {
-    cwd: root,
-    encoding: 'utf8',
-    timeout: 180_000,
-  });
-  if (built.status !== 0) {
-    process.stderr.write(`${built.stdout ?? ''}${built.stderr ?? ''}`);
-    throw new Error('vite build failed');
-  }
-}
-
 const quantile = (sorted: readonly number[], q: number) =>
   sorted.length === 0 ? NaN : sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
 
@@ -141,7 +88,7 @@ function frameStats(intervals: readonly number[]) {
   };
 }
 
-interface StandCase {
+export interface StandCase {
   label: string;
   sugarbushId: number;
   email: string;
@@ -157,7 +104,7 @@ interface Timing {
   wireBytes: number;
 }
 
-interface MapFigures {
+export interface MapFigures {
   treesDrawn: number;
   fetch: Timing;
   code: Timing | null;
@@ -287,7 +234,7 @@ const fmt = (n: number, digits = 0) =>
   n.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 const mib = (bytes: number) => `${fmt(bytes / 2 ** 20, 1)} MiB`;
 
-function report(stand: StandCase, f: MapFigures, others: readonly MapFigures[]) {
+export function reportMap(stand: StandCase, f: MapFigures, others: readonly MapFigures[]) {
   const data = f.fetch.ms;
   const rest = others.map((o) => `${fmt(o.firstDrawMs)} ms`).join(', ');
   console.log(
@@ -336,62 +283,19 @@ function report(stand: StandCase, f: MapFigures, others: readonly MapFigures[]) 
   );
 }
 
-/** The map benchmark: a synthetic stand of `trees` trees, then the demo stand for comparison. */
-export async function benchMapDraw(opts: { trees: number; seasons: number }) {
-  ensureClientBuilt();
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'clearwood-bench-map-'));
-  let server: Awaited<ReturnType<typeof startServer>> | undefined;
-  let browser: Browser | undefined;
-  try {
-    server = await startServer({
-      ...process.env,
-      NODE_ENV: 'test',
-      PORT: '0',
-      DATABASE_FILE: path.join(dir, 'bench-map.sqlite'),
-      LOGIN_RATE_LIMIT: '1000',
-    });
-    const db = server.db;
-    await seedDemoIfEmpty(db);
-    const sugarbushId = await writeSyntheticStand(db, {
-      trees: opts.trees,
-      seasons: opts.seasons,
-      lastSeason: upcomingSeason() - 1,
-    });
-    await writeStandOwner(db, sugarbushId, { email: BENCH_OWNER, password: DEMO_PASSWORD });
-    const demo = await db('sugarbushes as s')
-      .join('trees as t', 't.sugarbush_id', 's.id')
-      .where('s.name', 'Owl Ledge')
-      .whereNotNull('t.lat')
-      .groupBy('s.id')
-      .first('s.id', db.raw('count(*) as n'));
-
-    const stands: StandCase[] = [
-      { label: 'Bench Stand', sugarbushId, email: BENCH_OWNER, trees: opts.trees },
-      ...(demo && process.env.BENCH_MAP_DEMO !== '0'
-        ? [{ label: 'Owl Ledge (demo)', sugarbushId: demo.id, email: DEMO_OWNER, trees: demo.n }]
-        : []),
-    ];
-    console.log(
-      `\nWoods map in headless Chromium (${path.basename(process.env.CHROMIUM_PATH ?? '/usr/bin/chromium')}), server on ${server.url}`,
-    );
-    browser = await launchBrowser();
-    const results: MapFigures[] = [];
-    for (const stand of stands) {
-      const runs: MapFigures[] = [];
-      for (let i = 0; i < RUNS; i++) runs.push(await measureStand(browser, server.url, stand));
-      runs.sort((a, b) => a.firstDrawMs - b.firstDrawMs);
-      report(stand, runs[0], runs.slice(1));
-      results.push(runs[0]);
-    }
-    if (results.length === 2) {
-      const [big, small] = results;
-      console.log(
-        `\n${fmt(big.treesDrawn / small.treesDrawn, 1)}× the trees: map data ${fmt(big.fetch.ms / small.fetch.ms, 1)}×, first full draw ${fmt(big.firstDrawMs / small.firstDrawMs, 1)}×, longest task ${fmt(big.longestTaskMs / Math.max(small.longestTaskMs, 1), 1)}×, drag median frame ${fmt(big.drag.median / small.drag.median, 2)}×`,
-      );
-    }
-  } finally {
-    await browser?.close();
-    await server?.close();
-    fs.rmSync(dir, { recursive: true, force: true });
-  }
+/**
+ * Open the stand's map `runs` times (a fresh page each) on a running server, print the fastest
+ * load's figures and return them with the other loads' first-draw times.
+ */
+export async function measureMap(
+  browser: Browser,
+  baseUrl: string,
+  stand: StandCase,
+  runs: number,
+): Promise<{ best: MapFigures; others: MapFigures[] }> {
+  const all: MapFigures[] = [];
+  for (let i = 0; i < runs; i++) all.push(await measureStand(browser, baseUrl, stand));
+  all.sort((a, b) => a.firstDrawMs - b.firstDrawMs);
+  reportMap(stand, all[0], all.slice(1));
+  return { best: all[0], others: all.slice(1) };
 }

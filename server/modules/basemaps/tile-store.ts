@@ -1,6 +1,10 @@
 import fs from 'node:fs';
 import Database from 'better-sqlite3';
 
+/** One tile by its TMS address; kept on the file's lookup index (`ensureTileIndexes`). */
+export const TILE_LOOKUP_SQL =
+  'select tile_data from tiles where zoom_level = ? and tile_column = ? and tile_row = ?';
+
 interface OpenFile {
   db: Database.Database;
   tile: Database.Statement<[number, number, number], Buffer>;
@@ -24,11 +28,7 @@ export function tileStore(capacity = 16) {
     }
     if (!entry) {
       const db = new Database(file, { readonly: true, fileMustExist: true });
-      const tile = db
-        .prepare<[number, number, number], Buffer>(
-          'select tile_data from tiles where zoom_level = ? and tile_column = ? and tile_row = ?',
-        )
-        .pluck();
+      const tile = db.prepare<[number, number, number], Buffer>(TILE_LOOKUP_SQL).pluck();
       entry = { db, tile, mtimeMs };
     }
     open.delete(file); // re-insert: Map order is the recency order

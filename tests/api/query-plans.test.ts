@@ -1,0 +1,179 @@
+/**
+ * The hot reads stay on their indexes: every statement a page sends is explained by SQLite
+ * (`EXPLAIN QUERY PLAN`) and none may walk a whole table or need an index SQLite builds for
+ * itself. With no `ANALYZE` statistics the planner chooses the same way on a small test stand as
+ * on one of 100,000 trees, so a plan that scans here scans there. SQLite only: PostgreSQL's
+ * planner goes by table statistics, and on a test stand of a dozen trees it rightly reads whole
+ * tables, so its plans here say nothing about a large stand.
+ */
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import Database from 'better-sqlite3';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { adviceRepository } from '../../server/modules/advice/advice.repository';
+import { adviseAndStore } from '../../server/modules/advice/advise-and-store';
+import { inspectMbtiles } from '../../server/modules/basemaps/mbtiles';
+import { TILE_LOOKUP_SQL } from '../../server/modules/basemaps/tile-store';
+import { solidPng, writeMbtiles } from './mbtiles-fixture';
+import {
+  cteNames,
+  explain,
+  explainRaw,
+  offIndexSteps,
+  queriesDuring,
+  type CapturedQuery,
+} from './query-plan';
+import { upcomingSeason } from '../../shared/schemas/plan';
+import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
+import { onPostgres } from './test-database';
+
+const describeOnSqlite = describe.skipIf(onPostgres);
+
+let t: Awaited<ReturnType<typeof makeTestApp>>;
+let team: Awaited<ReturnType<typeof standWithTeam>>;
+let owner: Awaited<ReturnType<typeof signIn>>;
+let treeId: number;
+
+beforeAll(async () => {
+  if (onPostgres) return;
+  t = await makeTestApp();
+  team = await standWithTeam(t.db);
+  for (let i = 1; i <= 12; i++) {
+    const id = await addTree(t.db, team.standId, `Q-${String(i).padStart(2, '0')}`, {
+      lat: 44.3 + i / 1e4,
+      lng: -72.6,
+    });
+    const [first] = await t
+      .db('measurements')
+      .insert([
+        { tree_id: id, measured_on: '2024-10-01', season: 2024, dbh_cm: 30 + i },
+        { tree_id: id, measured_on: '2025-10-01', season: 2025, dbh_cm: 31 + i },
+      ])
+      .returning('id');
+    // A corrected reading, so the plans see the "no later row corrects it" test at work.
+    if (i % 4 === 0)
+      await t.db('measurements').insert({
+        tree_id: id,
+        measured_on: '2024-10-01',
+        season: 2024,
+        dbh_cm: 30.5 + i,
+        corrects_id: first.id,
+      });
+    await t.db('tapholes').insert({
+      tree_id: id,
+      season: 2025,
+      height_cm: 90,
+      azimuth_deg: 180,
+      depth_cm: 5,
+      bit_cm: 0.8,
+      collection: 'vacuum',
+    });
+    treeId = id;
+  }
+  await recordsWritten(t.db, team.standId);
+  owner = await signIn(t.app, team.users.owner);
+  // The season's advice stored once, so the reads below are the steady state's.
+  expect((await owner.agent.get(`/api/sugarbushes/${team.standId}/plan`)).status).toBe(200);
+});
+afterAll(() => t?.close());
+
+/** The statements `work` sends, each with the plan steps that leave the indexes. */
+async function offIndexDuring(work: () => Promise<unknown>) {
+  const queries = await queriesDuring(t.db, work);
+  expect(queries.length).toBeGreaterThan(0);
+  const report: { sql: string; steps: string[] }[] = [];
+  for (const q of queries as CapturedQuery[]) {
+    const steps = offIndexSteps(q.sql, await explain(t.db, q), cteNames(q.sql));
+    if (steps.length) report.push({ sql: q.sql, steps });
+  }
+  return report;
+}
+
+const offIndex = (url: string) =>
+  offIndexDuring(async () => {
+    const res = await owner.agent.get(url);
+    expect(res.status).toBe(200);
+  });
+
+describeOnSqlite('query plans of the hot reads', () => {
+  it('when a page of the tree register is read, in each order and filter, then no statement walks a whole table', async () => {
+    for (const query of ['', '&sort=-dbh', '&sort=species', '&status=dead', '&q=Q-0']) {
+      const url = `/api/sugarbushes/${team.standId}/trees?page=1&pageSize=50${query}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
+  it('when one tree is read, then no statement walks a whole table', async () => {
+    expect(await offIndex(`/api/trees/${treeId}`)).toEqual([]);
+  });
+
+  it('when a plan page is read, in each order and filter, then no statement walks a whole table', async () => {
+    for (const query of [
+      '',
+      '&sort=-taps',
+      '&sort=share',
+      '&sort=dbh',
+      '&sort=verdict',
+      '&verdict=tap',
+      '&warning=slow-growth',
+      '&q=Q-0',
+    ]) {
+      const url = `/api/sugarbushes/${team.standId}/plan?page=1&pageSize=50${query}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
+  it('when the woods map, the stand figures or the advice status are read, then no statement walks a whole table', async () => {
+    for (const path of ['map', 'figures', 'advice-status']) {
+      const url = `/api/sugarbushes/${team.standId}/${path}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
+  it("when a tree's advice page is read, then no statement walks a whole table", async () => {
+    expect(await offIndex(`/api/trees/${treeId}/advice`)).toEqual([]);
+  });
+
+  it('when a measurement is recorded and its tree re-advised, then no statement walks a whole table', async () => {
+    const steps = await offIndexDuring(async () => {
+      const res = await owner.agent
+        .post(`/api/trees/${treeId}/measurements`)
+        .set('x-csrf-token', owner.csrf)
+        .send({ measuredOn: '2025-11-20', dbhCm: 43.2, crownDiebackPct: 0 });
+      expect(res.status).toBe(201);
+    });
+    expect(steps).toEqual([]);
+  });
+
+  it("when the stand's advice is recomputed, then a worker's statements stay on their indexes", async () => {
+    const season = upcomingSeason();
+    const ids = (await t.db('trees').where({ sugarbush_id: team.standId }).pluck('id')).map(Number);
+    const steps = await offIndexDuring(async () => {
+      await adviceRepository(t.db).staleTreeIds(team.standId, season, 0);
+      await adviseAndStore(t.db, team.standId, season, ids.slice(0, 5));
+    });
+    expect(steps).toEqual([]);
+  });
+
+  it('when a tile is looked up in an uploaded basemap, then it is found through the lookup index', () => {
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'clearwood-plan-'));
+    for (const asViews of [false, true]) {
+      const file = writeMbtiles(path.join(dir, `tiles-${asViews ? 'view' : 'table'}.mbtiles`), {
+        asViews,
+        tiles: [{ z: 3, x: 2, row: 5, data: solidPng([10, 120, 60]) }],
+      });
+      inspectMbtiles(file); // what an upload goes through: adds the lookup indexes
+      const db = new Database(file, { readonly: true });
+      try {
+        const plan = explainRaw(db, TILE_LOOKUP_SQL, [3, 2, 5]);
+        expect(offIndexSteps(TILE_LOOKUP_SQL, plan)).toEqual([]);
+        expect(plan.join('\n')).toMatch(
+          /SEARCH (tiles|map) USING (COVERING )?INDEX \w+ \(zoom_level=\? AND tile_column=\? AND tile_row=\?\)/,
+        );
+      } finally {
+        db.close();
+      }
+    }
+  });
+});
