@@ -15,6 +15,7 @@ import { createBackground } from './lib/background';
 import { createAdviceJobs } from './modules/advice/advice-jobs';
 import { anonymousCsrfId } from './lib/anonymous-id';
 import { consoleLogger, type Logger } from './lib/logger';
+import { touchRarely } from './lib/touch-rarely';
 import { createMailer, type Mailer } from './mail/mailer';
 import { errorHandler, notFoundHandler } from './middleware/errors';
 import { devRoutes } from './modules/dev/dev.routes';
@@ -89,12 +90,15 @@ export function createApp(opts: AppOptions) {
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
 
-  const store = new ConnectSessionKnexStore({
-    knex: db,
-    tableName: 'sessions',
-    createTable: false,
-    cleanupInterval: config.NODE_ENV === 'test' ? 0 : 15 * 60_000,
-  });
+  const store = touchRarely(
+    new ConnectSessionKnexStore({
+      knex: db,
+      tableName: 'sessions',
+      createTable: false,
+      cleanupInterval: config.NODE_ENV === 'test' ? 0 : 15 * 60_000,
+    }),
+    10 * 60_000,
+  );
   app.use(
     session({
       name: 'clearwood.sid',

@@ -111,6 +111,18 @@ export function plansService(ctx: AppContext) {
     };
   }
 
+  const treeAdvice = new Map<string, Promise<TreeAdvice>>();
+  function keepTreeAdvice(key: string, work: () => Promise<TreeAdvice>): Promise<TreeAdvice> {
+    let value = treeAdvice.get(key);
+    if (!value) {
+      value = work();
+      treeAdvice.set(key, value);
+      value.catch(() => treeAdvice.delete(key));
+      while (treeAdvice.size > 500) treeAdvice.delete(treeAdvice.keys().next().value!);
+    }
+    return value;
+  }
+
   async function complete(sugarbushId: number, season: number, version: number) {
     const [totals, [{ n }]] = await Promise.all([
       totalsFor(sugarbushId, season, version),
@@ -125,17 +137,27 @@ export function plansService(ctx: AppContext) {
       treeId: number,
       season = upcomingSeason(),
     ): Promise<TreeAdvice> {
-      const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
-      const [tree] = await loadStandTrees(ctx.db, sugarbushId, treeId);
-      if (!tree) throw new AppError(404, 'not-found', 'Tree not found');
-      const advice = adviseTree(tree, { season, profile, sunnyAzimuthDeg, withProjection: true });
-      return {
-        ...advice,
-        treeId: tree.id,
-        tag: tree.tag,
-        season,
-        profile: summary(profile, notice),
-      };
+      // A tree's advice with its projection is a pure function of its record, the guideline and
+      // the season: kept by their versions, so it is worked out once per change.
+      const [versions, stand] = await Promise.all([
+        ctx.db('trees').where({ id: treeId, sugarbush_id: sugarbushId }).first('record_version'),
+        ctx.db('sugarbushes').where({ id: sugarbushId }).first('advice_version'),
+      ]);
+      if (!versions) throw new AppError(404, 'not-found', 'Tree not found');
+      const key = `${treeId}:${versions.record_version}:${stand?.advice_version}:${season}`;
+      return keepTreeAdvice(key, async () => {
+        const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
+        const [tree] = await loadStandTrees(ctx.db, sugarbushId, treeId);
+        if (!tree) throw new AppError(404, 'not-found', 'Tree not found');
+        const advice = adviseTree(tree, { season, profile, sunnyAzimuthDeg, withProjection: true });
+        return {
+          ...advice,
+          treeId: tree.id,
+          tag: tree.tag,
+          season,
+          profile: summary(profile, notice),
+        };
+      });
     },
 
     /** The season's plan under another guideline, against today's, before the owner saves it. */
