@@ -15,6 +15,7 @@ import type {
 } from '../../../shared/schemas/guideline-preview';
 import { profileColumns } from '../sugarbushes/profile-choice';
 import { diffPlans } from './plan-diff';
+import { keptByStamp } from '../../lib/kept-by-stamp';
 import { adviceRepository } from '../advice/advice.repository';
 import { profileOf } from '../advice/stand-guideline';
 import { loadStandTrees } from './plans.repository';
@@ -59,24 +60,14 @@ export function plansService(ctx: AppContext) {
   }
 
   /**
-   * Whole-stand reads (totals, a filtered or re-sorted order) change only with the stand's record
-   * or guideline: each is worked out once in a worker per change counter and kept here.
+   * Whole-stand reads (totals, a filtered or re-sorted order, the tree count) change only with
+   * the stand's record or guideline: each is worked out once (in a worker where it is heavy) and
+   * kept until the stand's change counter moves.
    */
-  const kept = new Map<string, Promise<unknown>>();
-  async function keep<T>(key: string, work: () => Promise<T>): Promise<T> {
-    let value = kept.get(key) as Promise<T> | undefined;
-    if (!value) {
-      value = work();
-      kept.set(key, value);
-      value.catch(() => kept.delete(key));
-      while (kept.size > 32) kept.delete(kept.keys().next().value!);
-    }
-    return value;
-  }
-  async function stamp(sugarbushId: number, season: number, version: number) {
-    const row = await ctx.db('sugarbushes').where({ id: sugarbushId }).first('record_seq');
-    return `${sugarbushId}:${season}:${version}:${row?.record_seq}`;
-  }
+  const kept = keptByStamp(ctx.db);
+  const keep = kept.keep;
+  const stamp = async (sugarbushId: number, season: number, version: number) =>
+    `${await kept.stamp(sugarbushId)}:${season}:${version}`;
   async function totalsFor(sugarbushId: number, season: number, version: number) {
     const key = `${await stamp(sugarbushId, season, version)}:totals`;
     return keep(key, () => ctx.advice.totals(sugarbushId, season, version));
@@ -124,11 +115,14 @@ export function plansService(ctx: AppContext) {
   }
 
   async function complete(sugarbushId: number, season: number, version: number) {
-    const [totals, [{ n }]] = await Promise.all([
+    const key = `${await kept.stamp(sugarbushId)}:trees`;
+    const [totals, trees] = await Promise.all([
       totalsFor(sugarbushId, season, version),
-      ctx.db('trees').where({ sugarbush_id: sugarbushId }).count({ n: '*' }),
+      keep(key, async () =>
+        Number((await ctx.db('trees').where({ sugarbush_id: sugarbushId }).count({ n: '*' }))[0].n),
+      ),
     ]);
-    return totals.trees === Number(n);
+    return totals.trees === trees;
   }
 
   return {

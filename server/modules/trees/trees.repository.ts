@@ -61,7 +61,11 @@ export function treesRepository(db: Knex) {
   ];
 
   return {
-    async list(sugarbushId: number, f: TreeFilters) {
+    async list(
+      sugarbushId: number,
+      f: TreeFilters,
+      countOf: (count: () => Promise<number>) => Promise<number>,
+    ) {
       const q = base()
         .where('t.sugarbush_id', sugarbushId)
         .modify((qb) => {
@@ -69,7 +73,7 @@ export function treesRepository(db: Knex) {
           if (f.status) qb.where('t.status', f.status);
           if (f.species) qb.where('t.species', f.species);
         });
-      const [{ n }] = await q.clone().count({ n: '*' });
+      const n = await countOf(async () => Number((await q.clone().count({ n: '*' }))[0].n));
       const desc = f.sort?.startsWith('-') ?? false;
       const column = sortColumns[(f.sort ?? 'tag').replace(/^-/, '')] ?? 't.tag';
       const rows: Row[] = await q

@@ -1,3 +1,4 @@
+import { keptByStamp } from '../../lib/kept-by-stamp';
 import { pageOf } from '../../lib/paging';
 import type { AppContext } from '../../context';
 import { AppError } from '../../errors';
@@ -18,10 +19,18 @@ const duplicateTag = (tag: string) =>
 
 export function treesService(ctx: AppContext) {
   const repo = treesRepository(ctx.db);
+  // A register page's total counts the whole stand: kept until the stand changes.
+  const counts = keptByStamp(ctx.db);
 
   return {
     async list(sugarbushId: number, q: TreeListQuery): Promise<Page<Tree>> {
-      return pageOf(q, (range) => repo.list(sugarbushId, { ...q, ...range }));
+      const stamp = await counts.stamp(sugarbushId);
+      const filter = JSON.stringify([q.q, q.status, q.species]);
+      return pageOf(q, (range) =>
+        repo.list(sugarbushId, { ...q, ...range }, (count) =>
+          counts.keep(`${stamp}:trees:${filter}`, count),
+        ),
+      );
     },
 
     async get(treeId: number): Promise<Tree> {
