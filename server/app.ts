@@ -84,6 +84,8 @@ export function createApp(opts: AppOptions) {
   // Large answers (a whole stand's map data) shrink several-fold; tiles are already compressed.
   app.use(
     compression({
+      // Fast over small: JSON shrinks almost as well at level 1, at a third of the work.
+      level: 1,
       filter: (req, res) => !req.path.startsWith('/api/basemaps/') && compression.filter(req, res),
     }),
   );

@@ -29,9 +29,14 @@ export function plansRoutes(ctx: AppContext) {
     sugarbushAccess(ctx.db),
     validate({ query: planQuerySchema }),
     async (_req, res) => {
-      res.json(
-        await service.planForStand(accessOf(res).sugarbushId, parsed<PlanQuery>(res, 'query')),
-      );
+      res
+        .type('json')
+        .send(
+          await service.planForStandJson(
+            accessOf(res).sugarbushId,
+            parsed<PlanQuery>(res, 'query'),
+          ),
+        );
     },
   );
 

@@ -3,7 +3,6 @@ import { AppError } from '../../errors';
 import { adviseTree, type GuidelineProfile } from '../../../shared/rules/index';
 import {
   upcomingSeason,
-  type PlanItem,
   type PlanQuery,
   type ProfileSummary,
   type StandPlanResponse,
@@ -66,15 +65,19 @@ export function plansService(ctx: AppContext) {
    */
   const kept = keptByStamp(ctx.db);
   const keep = kept.keep;
-  const stamp = async (sugarbushId: number, season: number, version: number) =>
-    `${await kept.stamp(sugarbushId)}:${season}:${version}`;
-  async function totalsFor(sugarbushId: number, season: number, version: number) {
-    const key = `${await stamp(sugarbushId, season, version)}:totals`;
+  async function totalsFor(sugarbushId: number, season: number, version: number, stamp?: string) {
+    const key = `${stamp ?? (await kept.stamp(sugarbushId))}:${season}:${version}:totals`;
     return keep(key, () => ctx.advice.totals(sugarbushId, season, version));
   }
 
   /** The page's trees: straight from the tag index when unfiltered, else from the kept order. */
-  async function pageOfPlan(sugarbushId: number, season: number, version: number, q: PlanQuery) {
+  async function pageOfPlan(
+    sugarbushId: number,
+    season: number,
+    version: number,
+    q: PlanQuery,
+    stamp: string,
+  ) {
     const offset = (q.page - 1) * q.pageSize;
     const sortKey = (q.sort ?? 'tag').replace(/^-/, '');
     if (!q.q && !q.verdict && !q.warning && sortKey === 'tag') {
@@ -84,12 +87,12 @@ export function plansService(ctx: AppContext) {
           offset,
           limit: q.pageSize,
         }),
-        totalsFor(sugarbushId, season, version),
+        totalsFor(sugarbushId, season, version, stamp),
       ]);
       return { items, total: totals.trees };
     }
     const filter = { q: q.q, verdict: q.verdict, warning: q.warning, sort: q.sort };
-    const key = `${await stamp(sugarbushId, season, version)}:order:${JSON.stringify(filter)}`;
+    const key = `${stamp}:${season}:${version}:order:${JSON.stringify(filter)}`;
     const ids = await keep(key, () => ctx.advice.orderedIds(sugarbushId, season, version, filter));
     const pageIds = ids.slice(offset, offset + q.pageSize);
     const rows = await store.payloads(season, version, pageIds);
@@ -114,10 +117,10 @@ export function plansService(ctx: AppContext) {
     return value;
   }
 
-  async function complete(sugarbushId: number, season: number, version: number) {
-    const key = `${await kept.stamp(sugarbushId)}:trees`;
+  async function complete(sugarbushId: number, season: number, version: number, stamp: string) {
+    const key = `${stamp}:trees`;
     const [totals, trees] = await Promise.all([
-      totalsFor(sugarbushId, season, version),
+      totalsFor(sugarbushId, season, version, stamp),
       keep(key, async () =>
         Number((await ctx.db('trees').where({ sugarbush_id: sugarbushId }).count({ n: '*' }))[0].n),
       ),
@@ -194,27 +197,40 @@ export function plansService(ctx: AppContext) {
     },
 
     async planForStand(sugarbushId: number, q: PlanQuery): Promise<StandPlanResponse> {
+      return JSON.parse(await this.planForStandJson(sugarbushId, q)) as StandPlanResponse;
+    },
+
+    /**
+     * The plan page as the JSON text it is sent as: each item is the stored advice's own JSON
+     * with the tree's id and tag added, so a page is never parsed and written out again.
+     */
+    async planForStandJson(sugarbushId: number, q: PlanQuery): Promise<string> {
       const season = q.season ?? upcomingSeason();
       const { profile, notice } = await standSettings(sugarbushId);
       let version = await ctx.advice.ensure(sugarbushId, season);
+      let stamp = await kept.stamp(sugarbushId);
       // Every tree must have a current row; a write that went around the services shows here.
-      if (!(await complete(sugarbushId, season, version)))
+      if (!(await complete(sugarbushId, season, version, stamp))) {
         version = await ctx.advice.ensure(sugarbushId, season, { recheck: true });
+        stamp = await kept.stamp(sugarbushId);
+      }
       const [page, totals] = await Promise.all([
-        pageOfPlan(sugarbushId, season, version, q),
-        totalsFor(sugarbushId, season, version),
+        pageOfPlan(sugarbushId, season, version, q, stamp),
+        totalsFor(sugarbushId, season, version, stamp),
       ]);
-      return {
+      const head: Omit<StandPlanResponse, 'items'> = {
         season,
         profile: summary(profile, notice),
         totals,
-        items: page.items.map(
-          (i) => ({ ...JSON.parse(i.payload), treeId: i.treeId, tag: i.tag }) as PlanItem,
-        ),
         total: page.total,
         page: q.page,
         pageSize: q.pageSize,
       };
+      const items = page.items.map(
+        // The payload is an object's JSON: close it with the two fields every item carries.
+        (i) => `${i.payload.slice(0, -1)},"treeId":${i.treeId},"tag":${JSON.stringify(i.tag)}}`,
+      );
+      return `${JSON.stringify(head).slice(0, -1)},"items":[${items.join(',')}]}`;
     },
   };
 }
