@@ -1,18 +1,8 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, recordHosts, startDemoServer } from './harness';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { recordHosts, demoServerAndBrowser, offSite } from './harness';
 
-let server: Awaited<ReturnType<typeof startDemoServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startDemoServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = demoServerAndBrowser();
 
 /**
  * The token of the newest mailed `path?token=…` (or `path/<token>`) link to this address, read from the local
@@ -24,7 +14,7 @@ async function mailedToken(to: string, path: string, after = 0): Promise<string>
   await expect
     .poll(
       async () => {
-        const row = await server
+        const row = await env.server
           .db('outbox')
           .where('to_address', to)
           .where('id', '>', after)
@@ -40,12 +30,9 @@ async function mailedToken(to: string, path: string, after = 0): Promise<string>
 }
 
 async function lastOutboxId(): Promise<number> {
-  const row = await server.db('outbox').max({ id: 'id' }).first();
+  const row = await env.server.db('outbox').max({ id: 'id' }).first();
   return Number(row?.id ?? 0);
 }
-
-const offSite = (hosts: Set<string>) =>
-  [...hosts].filter((h) => h !== 'localhost' && h !== '127.0.0.1');
 
 async function signIn(page: Page, email: string, password: string) {
   await page.getByLabel('E-mail').fill(email);
@@ -56,12 +43,12 @@ async function signIn(page: Page, email: string, password: string) {
 describe('accounts, in a real browser', () => {
   it('a person signs up on a phone, opens the mailed link, starts a stand and sees its empty register with the next step', async () => {
     const email = 'wren.okafor@hemlock-hollow.example';
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();
     const hosts = recordHosts(page);
     const before = await lastOutboxId();
 
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${env.server.url}/sign-in`);
     await page.getByRole('link', { name: 'Create an account' }).click();
     await page.getByLabel('Your name').fill('Wren Okafor');
     await page.getByLabel('E-mail').fill(email);
@@ -71,7 +58,7 @@ describe('accounts, in a real browser', () => {
     await page.getByText(`We've sent a message to ${email}.`).waitFor();
 
     const token = await mailedToken(email, '/sign-up', before);
-    await page.goto(`${server.url}/sign-up?token=${token}`);
+    await page.goto(`${env.server.url}/sign-up?token=${token}`);
     await page.waitForURL(/\/sugarbushes\/new$/);
     await page.getByLabel('Name of the sugarbush').fill('Hemlock Hollow');
     await page.getByLabel('Sunny side').selectOption({ label: 'South-east (135°)' });
@@ -86,10 +73,10 @@ describe('accounts, in a real browser', () => {
     await page.getByText('No trees yet — add the first tree on the map').waitFor();
     expect(await page.getByRole('link', { name: 'Open the map' }).isVisible()).toBe(true);
 
-    const stand = await server.db('sugarbushes').where({ name: 'Hemlock Hollow' }).first();
+    const stand = await env.server.db('sugarbushes').where({ name: 'Hemlock Hollow' }).first();
     expect(stand).toMatchObject({ profile: 'traditional', sunny_azimuth_deg: 135 });
     expect(page.url()).toContain(`/sugarbushes/${stand.id}/trees`);
-    const membership = await server
+    const membership = await env.server
       .db('memberships as m')
       .join('users as u', 'u.id', 'm.user_id')
       .where({ 'u.email': email, 'm.sugarbush_id': stand.id })
@@ -101,19 +88,19 @@ describe('accounts, in a real browser', () => {
 
   it('a person asks for a reset, sets a new password twice, signs in with it, and the same link then says it is used', async () => {
     const email = 'consultant@fernside.example';
-    const context = await browser.newContext();
+    const context = await env.browser.newContext();
     const page = await context.newPage();
     const hosts = recordHosts(page);
     const before = await lastOutboxId();
 
-    await page.goto(`${server.url}/sign-in`);
+    await page.goto(`${env.server.url}/sign-in`);
     await page.getByRole('link', { name: 'Forgot your password?' }).click();
     await page.getByLabel('E-mail').fill(email);
     await page.getByRole('button', { name: 'Send the link' }).click();
     await page.getByRole('heading', { name: 'Check your inbox' }).waitFor();
 
     const token = await mailedToken(email, '/reset-password', before);
-    const link = `${server.url}/reset-password?token=${token}`;
+    const link = `${env.server.url}/reset-password?token=${token}`;
     await page.goto(link);
     await page.getByLabel('New password', { exact: true }).fill('sap-is-running-27');
     await page.getByLabel('New password again').fill('sap-is-running-27');
@@ -141,16 +128,16 @@ describe('accounts, in a real browser', () => {
 
   it('the owner invites a new consultant from Settings; the link, opened in a fresh browser, makes the account, which sees Owl Ledge; the link then says it is used', async () => {
     const email = 'juniper.hale@hemlock-hollow.example';
-    const stand = await server.db('sugarbushes').where({ name: 'Owl Ledge' }).first('id');
+    const stand = await env.server.db('sugarbushes').where({ name: 'Owl Ledge' }).first('id');
     const before = await lastOutboxId();
 
-    const ownerContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const ownerContext = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const owner = await ownerContext.newPage();
     const ownerHosts = recordHosts(owner);
-    await owner.goto(`${server.url}/sign-in`);
+    await owner.goto(`${env.server.url}/sign-in`);
     await signIn(owner, 'owner@fernside.example', 'maple-demo-2027');
     await owner.waitForURL(/\/sugarbushes\/\d+\/trees/);
-    await owner.goto(`${server.url}/sugarbushes/${stand.id}/settings`);
+    await owner.goto(`${env.server.url}/sugarbushes/${stand.id}/settings`);
     const invite = owner.getByRole('form', { name: 'Invite someone' });
     await invite.getByLabel('E-mail').fill(email);
     await invite.getByLabel('Role').selectOption('consultant');
@@ -164,10 +151,10 @@ describe('accounts, in a real browser', () => {
     await ownerContext.close();
 
     const token = await mailedToken(email, '/invitations', before);
-    const context = await browser.newContext();
+    const context = await env.browser.newContext();
     const page = await context.newPage();
     const hosts = recordHosts(page);
-    await page.goto(`${server.url}/invitations/${token}`);
+    await page.goto(`${env.server.url}/invitations/${token}`);
     await page.getByRole('heading', { name: 'Join Owl Ledge' }).waitFor();
     await page.getByText('Write notes').first().waitFor();
     await page.getByLabel('Your name').fill('Juniper Hale');
@@ -180,7 +167,7 @@ describe('accounts, in a real browser', () => {
     const me = await page.evaluate(async () => (await fetch('/api/auth/me')).json());
     expect(me.memberships).toEqual([{ sugarbushId: stand.id, role: 'consultant' }]);
 
-    await page.goto(`${server.url}/invitations/${token}`);
+    await page.goto(`${env.server.url}/invitations/${token}`);
     await page.getByRole('heading', { name: 'This invitation has already been used' }).waitFor();
     expect(offSite(hosts)).toEqual([]);
     await context.close();

@@ -1,22 +1,10 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import type { GuidelinePreview } from '../../shared/schemas/guideline-preview';
 import { upcomingSeason, type StandPlanResponse } from '../../shared/schemas/plan';
-import { launchBrowser, recordHosts, signInAs, startDemoServer } from './harness';
+import { recordHosts, signInAs, demoServerAndBrowser, offSite } from './harness';
 
-let server: Awaited<ReturnType<typeof startDemoServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startDemoServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-const local = (host: string) => host === 'localhost' || host === '127.0.0.1';
+const env = demoServerAndBrowser();
 
 /** The season plan's totals, asked through the page's own signed-in session. */
 const planTotals = (page: Page, sugarbushId: number, season: number) =>
@@ -41,9 +29,9 @@ async function shownFigure(page: Page, label: string): Promise<number> {
 describe('the owner changes the guideline, in a real browser', () => {
   it('previews traditional on Owl Ledge, the figures match the plan before and after saving, and the season plan follows', async () => {
     const season = upcomingSeason();
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    const page = await env.browser.newPage({ viewport: { width: 1280, height: 900 } });
     const hosts = recordHosts(page);
-    await signInAs(page, server.url, 'owner@fernside.example');
+    await signInAs(page, env.server.url, 'owner@fernside.example');
     await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
     const sugarbushId = Number(/\/sugarbushes\/(\d+)\//.exec(page.url())![1]);
 
@@ -106,7 +94,7 @@ describe('the owner changes the guideline, in a real browser', () => {
       .innerText();
     expect(Number(shownTaps.replace(/,/g, ''))).toBe(preview.to.taps);
 
-    expect([...hosts].filter((h) => !local(h))).toEqual([]);
+    expect(offSite(hosts)).toEqual([]);
     await page.close();
   });
 });

@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 import { startServer } from '../../server/index';
 import { seedDemoIfEmpty } from '../../server/scripts/seed-demo';
 
@@ -57,3 +58,26 @@ export async function signInAs(page: Page, baseUrl: string, email: string) {
   await page.getByLabel('Password').fill('maple-demo-2027');
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
+
+export type DemoServer = Awaited<ReturnType<typeof startDemoServer>>;
+
+/**
+ * A demo server and a browser for the test file: started before its tests, closed after them.
+ * Read `env.server` and `env.browser` inside the tests.
+ */
+export function demoServerAndBrowser(): { server: DemoServer; browser: Browser } {
+  const env = {} as { server: DemoServer; browser: Browser };
+  beforeAll(async () => {
+    env.server = await startDemoServer();
+    env.browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await env.browser?.close();
+    await env.server?.close();
+  });
+  return env;
+}
+
+/** The hosts a page asked that are not this machine: every browser test expects none. */
+export const offSite = (hosts: Set<string>) =>
+  [...hosts].filter((h) => h !== 'localhost' && h !== '127.0.0.1');

@@ -1,30 +1,19 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, recordHosts, signInAs, startDemoServer } from './harness';
+import { describe, expect, it } from 'vitest';
+import { recordHosts, signInAs, demoServerAndBrowser, offSite } from './harness';
 
-let server: Awaited<ReturnType<typeof startDemoServer>>;
-let browser: Browser;
+const env = demoServerAndBrowser();
 
 const markup = '<a href="//elsewhere.example">x</a>';
-const local = (host: string) => host === 'localhost' || host === '127.0.0.1';
-
-beforeAll(async () => {
-  server = await startDemoServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
 
 describe('user strings on the map', () => {
   it('when a tag holds markup, then its tooltip shows the characters as text, no link, and the page breaks no security policy', async () => {
-    const standId = (await server.db('sugarbushes').where({ name: 'Owl Ledge' }).first('id')).id;
-    const tree = await server
+    const standId = (await env.server.db('sugarbushes').where({ name: 'Owl Ledge' }).first('id'))
+      .id;
+    const tree = await env.server
       .db('trees')
       .where({ sugarbush_id: standId, tag: 'OL-0001' })
       .first('id');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
     const hosts = recordHosts(page);
     const violations: string[] = [];
@@ -33,7 +22,7 @@ describe('user strings on the map', () => {
     });
     page.on('pageerror', (e) => violations.push(String(e)));
 
-    await signInAs(page, server.url, 'forester@fernside.example');
+    await signInAs(page, env.server.url, 'forester@fernside.example');
     await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
     const renamed = await page.evaluate(
       async ({ id, tag }) => {
@@ -49,7 +38,7 @@ describe('user strings on the map', () => {
     );
     expect(renamed).toBe(200);
 
-    await page.goto(`${server.url}/sugarbushes/${standId}/map`);
+    await page.goto(`${env.server.url}/sugarbushes/${standId}/map`);
     await page.locator('.leaflet-container').waitFor();
     // Find it by its tag: the map zooms to the tree and centres it.
     await page.getByLabel('Find tree by tag').fill(markup);
@@ -64,7 +53,7 @@ describe('user strings on the map', () => {
     expect(await page.locator('.leaflet-tooltip a').count()).toBe(0);
     expect(await page.locator('a[href="//elsewhere.example"]').count()).toBe(0);
     expect(violations).toEqual([]);
-    expect([...hosts].filter((h) => !local(h))).toEqual([]);
+    expect(offSite(hosts)).toEqual([]);
     await context.close();
   });
 });

@@ -1,21 +1,10 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, recordHosts, signInAs, startDemoServer } from './harness';
+import { describe, expect, it } from 'vitest';
+import { recordHosts, signInAs, demoServerAndBrowser } from './harness';
 
-let server: Awaited<ReturnType<typeof startDemoServer>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startDemoServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const env = demoServerAndBrowser();
 
 async function firstActiveTreeId() {
-  const tree = await server
+  const tree = await env.server
     .db('trees as t')
     .join('sugarbushes as s', 's.id', 't.sugarbush_id')
     .where('s.name', 'Owl Ledge')
@@ -27,17 +16,17 @@ async function firstActiveTreeId() {
 
 describe('in a real browser', () => {
   it('every demo member signs in and sees Owl Ledge with its trees; the outsider sees only their own stand', async () => {
-    const [{ n }] = await server
+    const [{ n }] = await env.server
       .db('trees as t')
       .join('sugarbushes as s', 's.id', 't.sugarbush_id')
       .where('s.name', 'Owl Ledge')
       .count({ n: '*' });
     const total = Number(n).toLocaleString('en-US');
     for (const who of ['owner', 'forester', 'tapper', 'consultant']) {
-      const context = await browser.newContext();
+      const context = await env.browser.newContext();
       const page = await context.newPage();
       const hosts = recordHosts(page);
-      await signInAs(page, server.url, `${who}@fernside.example`);
+      await signInAs(page, env.server.url, `${who}@fernside.example`);
       await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
       await expect.poll(() => page.getByText('Owl Ledge').first().isVisible()).toBe(true);
       await expect
@@ -46,9 +35,9 @@ describe('in a real browser', () => {
       expect([...hosts].filter((h) => h !== 'localhost' && h !== '127.0.0.1')).toEqual([]);
       await context.close();
     }
-    const context = await browser.newContext();
+    const context = await env.browser.newContext();
     const page = await context.newPage();
-    await signInAs(page, server.url, 'outsider@elsewhere.example');
+    await signInAs(page, env.server.url, 'outsider@elsewhere.example');
     await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
     await page.getByRole('table').waitFor();
     expect(await page.getByText('Owl Ledge').count()).toBe(0);
@@ -57,11 +46,11 @@ describe('in a real browser', () => {
 
   it('a forester records a reading far off the last one, confirms it, and sees it in the diameter history', async () => {
     const tree = await firstActiveTreeId();
-    const context = await browser.newContext();
+    const context = await env.browser.newContext();
     const page = await context.newPage();
-    await signInAs(page, server.url, 'forester@fernside.example');
+    await signInAs(page, env.server.url, 'forester@fernside.example');
     await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
-    await page.goto(`${server.url}/trees/${tree.id}`);
+    await page.goto(`${env.server.url}/trees/${tree.id}`);
     await page.getByRole('heading', { name: 'Record measurement' }).waitFor();
     await page.getByLabel('Date').fill('2026-11-20');
     await page.getByLabel('Unit', { exact: true }).selectOption('cm');
@@ -69,7 +58,9 @@ describe('in a real browser', () => {
     // Far more than a year's growth: the form asks to re-measure or confirm before it saves.
     const confirm = page.getByRole('group', { name: 'Confirm the reading' });
     await confirm.waitFor();
-    expect(await confirm.textContent()).toMatch(/cm more than (earlier this season|last season|in \d{4}) — re-measure or confirm/);
+    expect(await confirm.textContent()).toMatch(
+      /cm more than (earlier this season|last season|in \d{4}) — re-measure or confirm/,
+    );
     await page.getByRole('button', { name: 'Save measurement' }).click();
     await page.getByText('Confirm it, or correct the value.').waitFor();
     await confirm.getByRole('checkbox').check();
@@ -79,7 +70,7 @@ describe('in a real browser', () => {
       .poll(() => history.getByText('Nov 20, 2026').count(), { timeout: 10000 })
       .toBeGreaterThan(0);
     await expect.poll(() => history.getByText('77.7').count()).toBeGreaterThan(0);
-    const saved = await server
+    const saved = await env.server
       .db('measurements')
       .where({ tree_id: tree.id, measured_on: '2026-11-20' })
       .first();
@@ -90,11 +81,11 @@ describe('in a real browser', () => {
 
   it('a tapper sees no measurement form, and the API refuses their POST with 403', async () => {
     const tree = await firstActiveTreeId();
-    const context = await browser.newContext();
+    const context = await env.browser.newContext();
     const page = await context.newPage();
-    await signInAs(page, server.url, 'tapper@fernside.example');
+    await signInAs(page, env.server.url, 'tapper@fernside.example');
     await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
-    await page.goto(`${server.url}/trees/${tree.id}`);
+    await page.goto(`${env.server.url}/trees/${tree.id}`);
     await page.getByRole('table', { name: 'Diameter history' }).waitFor();
     expect(await page.getByRole('heading', { name: 'Record measurement' }).count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Save measurement' }).count()).toBe(0);
@@ -109,7 +100,7 @@ describe('in a real browser', () => {
     }, tree.id);
     expect(status).toBe(403);
     expect(
-      await server
+      await env.server
         .db('measurements')
         .where({ tree_id: tree.id, measured_on: '2026-11-21' })
         .first(),

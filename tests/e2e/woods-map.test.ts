@@ -1,17 +1,14 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BrowserContext, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { solidPng, writeMbtiles, type FixtureTile } from '../api/mbtiles-fixture';
-import { launchBrowser, recordHosts, signInAs, startDemoServer } from './harness';
+import { recordHosts, signInAs, demoServerAndBrowser, offSite } from './harness';
 
-let server: Awaited<ReturnType<typeof startDemoServer>>;
-let browser: Browser;
+const env = demoServerAndBrowser();
 let standId: number;
 let treeTotal: number;
-
-const local = (host: string) => host === 'localhost' || host === '127.0.0.1';
 
 /** XYZ tile numbers of a point (Web Mercator). */
 function tileOf(lat: number, lng: number, z: number) {
@@ -24,11 +21,11 @@ function tileOf(lat: number, lng: number, z: number) {
 
 /** A raster MBTiles covering the stand at zooms 14–19, each tile a solid colour, rows in TMS. */
 async function standMbtiles(): Promise<Buffer> {
-  const box = await server
+  const box = await env.server
     .db('trees')
     .where({ sugarbush_id: standId })
     .whereNotNull('lat')
-    .first(server.db.raw('min(lat) as s, max(lat) as n, min(lng) as w, max(lng) as e'));
+    .first(env.server.db.raw('min(lat) as s, max(lat) as n, min(lng) as w, max(lng) as e'));
   const tiles: FixtureTile[] = [];
   const png = solidPng([120, 160, 110], 256);
   for (let z = 14; z <= 19; z++) {
@@ -56,29 +53,23 @@ async function standMbtiles(): Promise<Buffer> {
 
 async function openMap(context: BrowserContext): Promise<Page> {
   const page = await context.newPage();
-  await signInAs(page, server.url, 'forester@fernside.example');
+  await signInAs(page, env.server.url, 'forester@fernside.example');
   await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
-  await page.goto(`${server.url}/sugarbushes/${standId}/map`);
+  await page.goto(`${env.server.url}/sugarbushes/${standId}/map`);
   await page.locator('.leaflet-container').waitFor();
   return page;
 }
 
 beforeAll(async () => {
-  server = await startDemoServer();
-  browser = await launchBrowser();
-  standId = (await server.db('sugarbushes').where({ name: 'Owl Ledge' }).first('id')).id;
+  standId = (await env.server.db('sugarbushes').where({ name: 'Owl Ledge' }).first('id')).id;
   treeTotal = Number(
-    (await server.db('trees').where({ sugarbush_id: standId }).count({ n: '*' }))[0].n,
+    (await env.server.db('trees').where({ sugarbush_id: standId }).count({ n: '*' }))[0].n,
   );
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
 });
 
 describe('the woods map in a real browser', () => {
   it("draws the demo's trees: the legend's total is the API's, and a click on a tree opens its card", async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await openMap(context);
     const hosts = recordHosts(page);
     const legend = page.getByRole('region', { name: 'Legend' });
@@ -86,7 +77,7 @@ describe('the woods map in a real browser', () => {
       .getByRole('heading', { name: `${treeTotal.toLocaleString('en-US')} trees` })
       .waitFor();
     const api = await context.request.get(
-      `${server.url}/api/sugarbushes/${standId}/map?season=2027`,
+      `${env.server.url}/api/sugarbushes/${standId}/map?season=2027`,
     );
     const columns = await api.json();
     expect(columns.count).toBe(treeTotal);
@@ -112,13 +103,13 @@ describe('the woods map in a real browser', () => {
     await expect
       .poll(() => card.first().locator('dt:text-is("DBH") + dd').textContent())
       .toMatch(/^\d+(\.\d)? (cm|in)$/);
-    expect([...hosts].filter((h) => !local(h))).toEqual([]);
+    expect(offSite(hosts)).toEqual([]);
     await context.close();
   });
 
   it('shows each background: plain grid, demo tiles and an uploaded MBTiles file', async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    const { token } = await (await context.request.get(`${server.url}/api/auth/csrf`)).json();
+    const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const { token } = await (await context.request.get(`${env.server.url}/api/auth/csrf`)).json();
     const page = await openMap(context);
     const hosts = recordHosts(page);
     const tileStatuses = new Map<string, number[]>();
@@ -143,17 +134,20 @@ describe('the woods map in a real browser', () => {
       .toBeGreaterThan(0);
 
     const csrf =
-      (await (await context.request.get(`${server.url}/api/auth/csrf`)).json()).token ?? token;
-    const upload = await context.request.post(`${server.url}/api/sugarbushes/${standId}/basemaps`, {
-      headers: { 'x-csrf-token': csrf },
-      multipart: {
-        file: {
-          name: 'stand.mbtiles',
-          mimeType: 'application/octet-stream',
-          buffer: await standMbtiles(),
+      (await (await context.request.get(`${env.server.url}/api/auth/csrf`)).json()).token ?? token;
+    const upload = await context.request.post(
+      `${env.server.url}/api/sugarbushes/${standId}/basemaps`,
+      {
+        headers: { 'x-csrf-token': csrf },
+        multipart: {
+          file: {
+            name: 'stand.mbtiles',
+            mimeType: 'application/octet-stream',
+            buffer: await standMbtiles(),
+          },
         },
       },
-    });
+    );
     expect(upload.status()).toBe(201);
     await page.reload();
     await page.locator('.leaflet-container').waitFor();
@@ -163,17 +157,19 @@ describe('the woods map in a real browser', () => {
         timeout: 10000,
       })
       .toBeGreaterThan(0);
-    expect([...hosts].filter((h) => !local(h))).toEqual([]);
+    expect(offSite(hosts)).toEqual([]);
     await context.close();
   });
 
   it('switched to plain, the map reloads with every host but localhost cut off, and asks no other host', async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const asked = new Set<string>();
     await context.route('**/*', (route) => {
       const host = new URL(route.request().url()).hostname;
       asked.add(host);
-      return local(host) ? route.continue() : route.abort('internetdisconnected');
+      return offSite(new Set([host])).length === 0
+        ? route.continue()
+        : route.abort('internetdisconnected');
     });
     const page = await openMap(context);
     await page.getByRole('radiogroup', { name: 'Background' }).getByLabel('Plain').check();
@@ -187,12 +183,12 @@ describe('the woods map in a real browser', () => {
       await page.getByRole('radiogroup', { name: 'Background' }).getByLabel('Plain').isChecked(),
     ).toBe(true);
     expect(await page.locator('.leaflet-tile').count()).toBe(0);
-    expect([...asked].filter((h) => !local(h))).toEqual([]);
+    expect(offSite(asked)).toEqual([]);
     await context.close();
   });
 
   it('opened again with nothing changed, the map is confirmed by its tag and not sent again', async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await env.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await openMap(context);
     const legend = page.getByRole('region', { name: 'Legend' });
     await legend
@@ -213,7 +209,7 @@ describe('the woods map in a real browser', () => {
       .getByRole('heading', { name: `${treeTotal.toLocaleString('en-US')} trees` })
       .waitFor();
     await expect.poll(() => answers.length).toBe(1);
-    const current = await context.request.get(`${server.url}/api/sugarbushes/${standId}/map`);
+    const current = await context.request.get(`${env.server.url}/api/sugarbushes/${standId}/map`);
     // The browser sent the tag of the copy it holds, and the server answered without a body.
     expect(answers[0].tag).toBe(current.headers()['etag']);
     expect(answers[0].size).toBe(0);
