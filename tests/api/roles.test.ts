@@ -181,7 +181,7 @@ const cases: RouteCase[] = [
     name: 'write a note',
     method: 'post',
     path: (i) => `/api/trees/${i.treeId}/notes`,
-    body: () => ({ category: 'finding', body: 'Frost crack on the north face.' }),
+    body: () => ({ category: 'health', body: 'Frost crack on the north face.' }),
     allowed: ['owner', 'consultant'],
   },
 ];
