@@ -28,7 +28,7 @@ interface Row {
 /**
  * The "needs a look" queue in SQL: a stand's trees with an unresolved hazard note, a follow-up
  * past or coming due, or a warning in the season's stored advice. Filtered, ordered and paged in
- * the database; the notes are summed per tree first (a stand has far fewer notes than trees).
+ * the database.
  */
 export function attentionRepository(db: Knex) {
   return {
@@ -38,25 +38,13 @@ export function attentionRepository(db: Knex) {
       days: FollowUpDays,
       range: { offset: number; limit: number },
     ): Promise<{ items: AttentionItem[]; total: number }> {
-      const openNotes = db('notes')
-        .where('sugarbush_id', at.sugarbushId)
-        .whereNotNull('tree_id')
-        .whereNull('resolved_at')
-        .groupBy('tree_id')
-        .select(
-          'tree_id',
-          db.raw(`sum(case when category = 'hazard' then 1 else 0 end) as hazards`),
-          db.raw('min(follow_up_on) as next_follow_up'),
-        );
-
+      const hazards = `sum(case when n.category = 'hazard' then 1 else 0 end)`;
+      const next = 'min(n.follow_up_on)';
       const mask = q.warning ? warningBit(q.warning) : warningMask(warningCodes);
       const when: Record<AttentionReason, Condition> = {
-        hazard: { sql: 'coalesce(n.hazards, 0) > 0', bindings: [] },
-        overdue: { sql: 'n.next_follow_up < ?', bindings: [days.today] },
-        due: {
-          sql: '(n.next_follow_up >= ? and n.next_follow_up <= ?)',
-          bindings: [days.today, days.dueBy],
-        },
+        hazard: { sql: `${hazards} > 0`, bindings: [] },
+        overdue: { sql: `${next} < ?`, bindings: [days.today] },
+        due: { sql: `(${next} >= ? and ${next} <= ?)`, bindings: [days.today, days.dueBy] },
         warning: { sql: '(coalesce(a.warning_mask, 0) & ?) <> 0', bindings: [mask] },
       };
       const reasons = q.reason ? [q.reason] : (Object.keys(when) as AttentionReason[]);
@@ -67,6 +55,7 @@ export function attentionRepository(db: Knex) {
         bindings: reasons.flatMap((r) => when[r].bindings),
       };
 
+      // Each tree with its open notes (through the notes' tree index), summed per tree.
       const base = db('trees as t')
         .leftJoin('tree_advice as a', function () {
           this.on('a.tree_id', 't.id')
@@ -74,24 +63,30 @@ export function attentionRepository(db: Knex) {
             .andOn('a.stand_version', db.raw('?', [at.standVersion]))
             .andOn('a.tree_version', 't.record_version');
         })
-        .leftJoin(openNotes.as('n'), 'n.tree_id', 't.id')
-        .where('t.sugarbush_id', at.sugarbushId)
-        .where((w) => {
-          for (const r of reasons) w.orWhereRaw(when[r].sql, when[r].bindings);
+        .leftJoin('notes as n', function () {
+          this.on('n.tree_id', 't.id').andOnNull('n.resolved_at');
         })
+        .where('t.sugarbush_id', at.sugarbushId)
         .modify((b) => {
           if (q.warning) b.whereRaw(when.warning.sql, when.warning.bindings);
           if (q.q) b.whereRaw('lower(t.tag) like ?', [`%${q.q.toLowerCase()}%`]);
-        });
-
-      const [{ n }] = await db.from(base.clone().select('t.id').as('queue')).count({ n: '*' });
+        })
+        .groupBy('t.id', 't.tag', 't.status', 'a.verdict', 'a.taps', 'a.warning_mask')
+        .havingRaw(
+          reasons.map((r) => `(${when[r].sql})`).join(' or '),
+          reasons.flatMap((r) => when[r].bindings),
+        );
+      const [{ n }] = await db
+        .with('queue', base.clone().select('t.id'))
+        .from('queue')
+        .count({ n: '*' });
 
       const sort = q.sort ?? 'priority';
       const dir = sort.startsWith('-') ? 'desc' : 'asc';
       const followUpOrder = (b: Knex.QueryBuilder) =>
         b
-          .orderByRaw('case when n.next_follow_up is null then 1 else 0 end')
-          .orderBy('n.next_follow_up', sort === 'priority' ? 'asc' : dir);
+          .orderByRaw(`case when ${next} is null then 1 else 0 end`)
+          .orderByRaw(`${next} ${sort === 'priority' ? 'asc' : dir}`);
       const rows: Row[] = await base
         .modify((b) => {
           if (sort === 'priority')
@@ -108,8 +103,8 @@ export function attentionRepository(db: Knex) {
           'a.verdict',
           'a.taps',
           'a.warning_mask',
-          'n.hazards',
-          'n.next_follow_up',
+          db.raw(`${hazards} as hazards`),
+          db.raw(`${next} as next_follow_up`),
         );
 
       return { items: rows.map((r) => toItem(r, days)), total: Number(n) };
