@@ -10,13 +10,21 @@ import { listQuerySchema } from './list-query';
 export const attentionReasons = ['hazard', 'overdue', 'due', 'warning'] as const;
 export type AttentionReason = (typeof attentionReasons)[number];
 
+/**
+ * The advice warnings that put a tree in the queue: all but those the verdict or the record
+ * already answer (too small to tap; growth unknown until a second season's reading).
+ */
+export const attentionWarnings: readonly WarningCode[] = warningCodes.filter(
+  (c) => c !== 'undersized' && c !== 'growth-unknown',
+);
+
 export const attentionSorts = ['priority', 'tag', '-tag', 'followUp', '-followUp'] as const;
 
 export const attentionQuerySchema = listQuerySchema.extend({
   season: z.coerce.number().int().min(1990).max(2200).optional(),
   sort: z.enum(attentionSorts).optional(),
   reason: z.enum(attentionReasons).optional(),
-  /** Only trees whose advice carries this warning. */
+  /** Only trees whose advice carries this warning (any warning, also those the queue leaves out). */
   warning: z.enum(warningCodes).optional(),
 });
 export type AttentionQuery = z.output<typeof attentionQuerySchema>;

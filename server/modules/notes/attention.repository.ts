@@ -1,9 +1,10 @@
 import type { Knex } from 'knex';
 import { warningCodes, type VerdictKey, type WarningCode } from '../../../shared/rules/index';
-import type {
-  AttentionItem,
-  AttentionQuery,
-  AttentionReason,
+import {
+  attentionWarnings,
+  type AttentionItem,
+  type AttentionQuery,
+  type AttentionReason,
 } from '../../../shared/schemas/attention';
 import type { TreeStatus } from '../../../shared/schemas/enums';
 import { warningBit, warningMask } from '../advice/advice-rows';
@@ -40,7 +41,7 @@ export function attentionRepository(db: Knex) {
     ): Promise<{ items: AttentionItem[]; total: number }> {
       const hazards = `sum(case when n.category = 'hazard' then 1 else 0 end)`;
       const next = 'min(n.follow_up_on)';
-      const mask = q.warning ? warningBit(q.warning) : warningMask(warningCodes);
+      const mask = q.warning ? warningBit(q.warning) : warningMask(attentionWarnings);
       const when: Record<AttentionReason, Condition> = {
         hazard: { sql: `${hazards} > 0`, bindings: [] },
         overdue: { sql: `${next} < ?`, bindings: [days.today] },
@@ -107,12 +108,13 @@ export function attentionRepository(db: Knex) {
           db.raw(`${next} as next_follow_up`),
         );
 
-      return { items: rows.map((r) => toItem(r, days)), total: Number(n) };
+      return { items: rows.map((r) => toItem(r, days, mask)), total: Number(n) };
     },
   };
 }
 
-function toItem(r: Row, days: FollowUpDays): AttentionItem {
+/** One tree of the queue; `counted` is the warnings' mask that puts a tree in it. */
+function toItem(r: Row, days: FollowUpDays, counted: number): AttentionItem {
   const maskOf = Number(r.warning_mask ?? 0);
   const warnings = warningCodes.filter((c: WarningCode) => (maskOf & warningBit(c)) !== 0);
   const hazards = Number(r.hazards ?? 0);
@@ -121,7 +123,7 @@ function toItem(r: Row, days: FollowUpDays): AttentionItem {
   if (hazards > 0) reasons.push('hazard');
   if (next !== null && next < days.today) reasons.push('overdue');
   else if (next !== null && next <= days.dueBy) reasons.push('due');
-  if (warnings.length > 0) reasons.push('warning');
+  if ((maskOf & counted) !== 0) reasons.push('warning');
   return {
     treeId: Number(r.id),
     tag: r.tag,

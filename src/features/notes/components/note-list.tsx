@@ -160,8 +160,8 @@ export function NoteList({
 
   return (
     <div>
-      <div className="mb-3 grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-6">
-        <div className="col-span-2 flex flex-col gap-1 sm:col-span-1 lg:col-span-2">
+      <div className="mb-3 grid grid-cols-2 gap-3 sm:grid-cols-3">
+        <div className="col-span-2 flex flex-col gap-1 sm:col-span-3">
           <label htmlFor={searchId} className="text-sm font-bold">
             Search the notes
           </label>
