@@ -76,8 +76,7 @@ export function thinStand(key: string, specs: readonly TreeSpec[]): TreeSpec[] {
   const cut = new Set(
     scored.slice(0, Math.round(THINNING.share * candidates.length)).map(({ t }) => t.n),
   );
-  const stumps = specs.filter((t) => cut.has(t.n));
-  const nearStumps = neighbours(stumps.concat(specs.filter((t) => !cut.has(t.n))), RELEASE_M);
+  const around = neighbours(specs, RELEASE_M);
   let felled = 0;
   return specs.map((t) => {
     if (cut.has(t.n)) {
@@ -94,7 +93,7 @@ export function thinStand(key: string, specs: readonly TreeSpec[]): TreeSpec[] {
       };
     }
     if (t.category !== null || !t.xy) return t;
-    const opened = (nearStumps.get(t.n) ?? []).filter((o) => cut.has(o.n)).length;
+    const opened = (around.get(t.n) ?? []).filter((o) => cut.has(o.n)).length;
     const factor = opened === 0 ? 1.06 : opened === 1 ? 1.18 : 1.28;
     return { ...t, release: { from: THINNING.firstSeason, factor } };
   });
