@@ -27,7 +27,7 @@ export function NoteItem({
   const about = note.treeTag ? `the note on tree ${note.treeTag}` : 'the note on the stand';
   return (
     <article
-      aria-label={`${open ? '' : 'Resolved '}note${note.treeTag ? ` on tree ${note.treeTag}` : ''}`}
+      aria-label={`${open ? 'Note' : 'Resolved note'} ${note.treeTag ? `on tree ${note.treeTag}` : 'on the stand'}`}
       className={open ? 'py-3' : 'py-3 text-ink/70'}
     >
       <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
