@@ -9,7 +9,7 @@ import { paths } from '@/config/paths';
 import { AdviceCard, type AdvisedSpot } from '@/features/advice/components/advice-card';
 import { DiameterHistory } from '@/features/measurements/components/diameter-history';
 import { MeasurementForm } from '@/features/measurements/components/measurement-form';
-import { TreeNotes } from '@/features/notes/components/tree-notes';
+import { TreeNoteForm, TreeNotes } from '@/features/notes/components/tree-notes';
 import { TapholeForm, type SpotRequest } from '@/features/tapholes/components/taphole-form';
 import { TapholeList } from '@/features/tapholes/components/taphole-list';
 import { TappingCaution } from '@/features/trees/components/tapping-caution';
@@ -91,6 +91,7 @@ export function TreeRoute() {
             </>
           )}
           {canRecord && <MeasurementForm treeId={treeId} />}
+          {canWriteNotes && <TreeNoteForm treeId={treeId} />}
         </div>
         <div className="flex min-w-0 flex-col gap-8 lg:order-1">
           <DiameterHistory treeId={treeId} canRecord={canRecord} />

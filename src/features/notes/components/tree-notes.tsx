@@ -3,7 +3,12 @@ import { NoteForm } from './note-form';
 import { NoteList } from './note-list';
 import { TreePhotos } from './tree-photos';
 
-/** The tree page's notes and photos: write, resolve and reopen for the owner and consultant. */
+/** Writing a note on one tree: on the tree page it sits with the other work, ahead of the record. */
+export function TreeNoteForm({ treeId }: { treeId: number }) {
+  return <NoteForm owner={{ treeId }} title="Write a note on this tree" defaultCategory="health" />;
+}
+
+/** The tree's notes and photos: resolve and reopen for the owner and the consultant. */
 export function TreeNotes({
   treeId,
   tag,
@@ -16,9 +21,6 @@ export function TreeNotes({
   const headingId = useId();
   return (
     <div className="flex flex-col gap-8">
-      {canWrite && (
-        <NoteForm owner={{ treeId }} title="Write a note on this tree" defaultCategory="health" />
-      )}
       <section aria-labelledby={headingId}>
         <h2 id={headingId} className="mb-3 text-lg font-bold">
           Notes
@@ -29,7 +31,7 @@ export function TreeNotes({
           canWrite={canWrite}
           emptyHint={
             canWrite
-              ? 'Write the first note above.'
+              ? 'Write the first one with the note form on this page.'
               : 'The owner and the consultant write notes on each tree.'
           }
         />
