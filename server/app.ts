@@ -13,6 +13,7 @@ import type { Config } from './config';
 import type { AppContext } from './context';
 import { createBackground } from './lib/background';
 import { createAdviceJobs } from './modules/advice/advice-jobs';
+import { createPhotoStore, type PhotoStore } from './modules/photos/photo-store';
 import { anonymousCsrfId } from './lib/anonymous-id';
 import { consoleLogger, type Logger } from './lib/logger';
 import { touchRarely } from './lib/touch-rarely';
@@ -33,6 +34,8 @@ export interface AppOptions {
   /** Folder of the built client; served with an SPA fallback when it exists. */
   clientDir?: string | null;
   log?: Logger;
+  /** Where photos are kept; by default what PHOTO_STORAGE names. */
+  photos?: PhotoStore;
 }
 
 /** Build the Express app. Exported for tests; `index.ts` only listens. */
@@ -46,6 +49,7 @@ export function createApp(opts: AppOptions) {
     mailer: opts.mailer ?? createMailer(config, db, log),
     background: createBackground(log),
     advice: createAdviceJobs({ db, database: config.database, log }),
+    photos: opts.photos ?? createPhotoStore(config.photos),
   };
   const production = config.NODE_ENV === 'production';
   const app = express();

@@ -38,6 +38,18 @@ const databaseUrl = z
     message: 'must be a postgres:// or postgresql:// URL',
   });
 
+/** Empty counts as unset, so `NAME=` in a shell file means "not given". */
+const unsetWhenEmpty = <T extends z.ZodType>(schema: T) =>
+  z.preprocess((v) => (v === '' ? undefined : v), schema.optional());
+
+/** S3 bucket names: 3–63 lower-case letters, digits, dots and hyphens, starting and ending alike. */
+const s3Bucket = z
+  .string()
+  .regex(
+    /^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/,
+    'must be an S3 bucket name (3–63 characters: a-z, 0-9, . and -)',
+  );
+
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   /** 0 picks a free port (tests). */
@@ -74,6 +86,35 @@ const envSchema = z.object({
     .default(200 * 1024 * 1024),
   /** Folder for uploaded basemaps; defaults to `basemaps/` beside the database file. */
   BASEMAP_DIR: z.string().min(1).optional(),
+  /** Where photos are kept: `disk` (PHOTO_DIR) or `s3` (an S3 bucket, PHOTO_S3_*). */
+  PHOTO_STORAGE: z.enum(['disk', 's3']).default('disk'),
+  /** Folder for photos on disk; defaults to `photos/` beside the database file. */
+  PHOTO_DIR: z.string().min(1).optional(),
+  /** Largest photo upload, in bytes; 10 MiB by default. */
+  PHOTO_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(10 * 1024 * 1024),
+  PHOTO_S3_BUCKET: unsetWhenEmpty(s3Bucket),
+  PHOTO_S3_REGION: unsetWhenEmpty(
+    z.string().regex(/^[a-z]{2}(-[a-z0-9]+)+$|^auto$/, 'must be a region name such as eu-west-1'),
+  ),
+  /** An S3-compatible service other than AWS (MinIO, a local stand-in): its http(s) URL. */
+  PHOTO_S3_ENDPOINT: unsetWhenEmpty(
+    z
+      .string()
+      .url()
+      .refine((v) => /^https?:\/\//i.test(v), { message: 'must be an http:// or https:// URL' }),
+  ),
+  PHOTO_S3_ACCESS_KEY_ID: unsetWhenEmpty(z.string().trim().min(1)),
+  PHOTO_S3_SECRET_ACCESS_KEY: unsetWhenEmpty(z.string().trim().min(1)),
+  /** Address the bucket in the path (`endpoint/bucket/key`), as most S3 stand-ins need. */
+  PHOTO_S3_FORCE_PATH_STYLE: bool.default(false),
+  /** Keys start with this (a folder inside a shared bucket). */
+  PHOTO_S3_PREFIX: unsetWhenEmpty(
+    z.string().regex(/^[A-Za-z0-9._/-]{1,100}$/, 'may hold only letters, digits, ., _, - and /'),
+  ),
 });
 
 type Parsed = z.infer<typeof envSchema>;
@@ -82,11 +123,26 @@ type Parsed = z.infer<typeof envSchema>;
 export type DatabaseTarget =
   { client: 'sqlite'; filename: string } | { client: 'pg'; url: string; poolMax: number };
 
+/** Where photo files are kept: a folder on this machine, or an S3 bucket. */
+export type PhotoStorageConfig =
+  | { kind: 'disk'; dir: string }
+  | {
+      kind: 's3';
+      bucket: string;
+      region: string;
+      endpoint?: string;
+      /** Without them the AWS SDK's own chain (environment, profile, instance role) is used. */
+      credentials?: { accessKeyId: string; secretAccessKey: string };
+      forcePathStyle: boolean;
+      prefix: string;
+    };
+
 export type Config = Omit<Parsed, 'SEED_DEMO' | 'BASEMAP_DIR'> & {
   appUrl: string;
   SEED_DEMO: boolean;
   BASEMAP_DIR: string;
   database: DatabaseTarget;
+  photos: PhotoStorageConfig;
 };
 
 /** Parse the environment once; a bad value stops start-up with a message naming each variable. */
@@ -107,6 +163,16 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     );
   if (production && c.DEV_OUTBOX_VIEW)
     problems.push('DEV_OUTBOX_VIEW: the outbox view is for development only, never in production');
+  if (c.PHOTO_STORAGE === 's3') {
+    if (!c.PHOTO_S3_BUCKET) problems.push('PHOTO_S3_BUCKET: required when PHOTO_STORAGE=s3');
+    if (!c.PHOTO_S3_REGION) problems.push('PHOTO_S3_REGION: required when PHOTO_STORAGE=s3');
+  }
+  if (Boolean(c.PHOTO_S3_ACCESS_KEY_ID) !== Boolean(c.PHOTO_S3_SECRET_ACCESS_KEY))
+    problems.push(
+      c.PHOTO_S3_ACCESS_KEY_ID
+        ? 'PHOTO_S3_SECRET_ACCESS_KEY: required with PHOTO_S3_ACCESS_KEY_ID'
+        : 'PHOTO_S3_ACCESS_KEY_ID: required with PHOTO_S3_SECRET_ACCESS_KEY',
+    );
   if (problems.length > 0)
     throw new ConfigError(`Invalid environment:\n${problems.map((p) => `  ${p}`).join('\n')}`);
   return {
@@ -114,9 +180,31 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     SEED_DEMO: c.SEED_DEMO ?? !production,
     appUrl: c.APP_URL ?? `http://localhost:${c.PORT}`,
     BASEMAP_DIR: c.BASEMAP_DIR ?? path.join(path.dirname(c.DATABASE_FILE), 'basemaps'),
+    photos: photoStorage(c),
     database: c.DATABASE_URL
       ? { client: 'pg', url: c.DATABASE_URL, poolMax: c.DATABASE_POOL_MAX }
       : { client: 'sqlite', filename: c.DATABASE_FILE },
+  };
+}
+
+function photoStorage(c: Parsed): PhotoStorageConfig {
+  if (c.PHOTO_STORAGE === 'disk')
+    return { kind: 'disk', dir: c.PHOTO_DIR ?? path.join(path.dirname(c.DATABASE_FILE), 'photos') };
+  return {
+    kind: 's3',
+    bucket: c.PHOTO_S3_BUCKET!,
+    region: c.PHOTO_S3_REGION!,
+    ...(c.PHOTO_S3_ENDPOINT ? { endpoint: c.PHOTO_S3_ENDPOINT } : {}),
+    ...(c.PHOTO_S3_ACCESS_KEY_ID && c.PHOTO_S3_SECRET_ACCESS_KEY
+      ? {
+          credentials: {
+            accessKeyId: c.PHOTO_S3_ACCESS_KEY_ID,
+            secretAccessKey: c.PHOTO_S3_SECRET_ACCESS_KEY,
+          },
+        }
+      : {}),
+    forcePathStyle: c.PHOTO_S3_FORCE_PATH_STYLE,
+    prefix: c.PHOTO_S3_PREFIX ? `${c.PHOTO_S3_PREFIX.replace(/\/+$/, '')}/` : '',
   };
 }
 

@@ -4,6 +4,7 @@ import type { Config } from './config';
 import type { Background } from './lib/background';
 import type { Logger } from './lib/logger';
 import type { Mailer } from './mail/mailer';
+import type { PhotoStore } from './modules/photos/photo-store';
 
 /** What every module needs, built once per app. */
 export interface AppContext {
@@ -14,4 +15,6 @@ export interface AppContext {
   background: Background;
   /** Whole-stand advice in worker threads. */
   advice: AdviceJobs;
+  /** Where photo files are kept (PHOTO_STORAGE). */
+  photos: PhotoStore;
 }

@@ -24,6 +24,7 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await app.ctx.background.idle();
     await app.ctx.advice.close();
+    app.ctx.photos.close();
     await db.destroy();
   };
   return { config, db, server, url, close, ctx: app.ctx };

@@ -8,6 +8,7 @@ import { membersRoutes } from './modules/members/members.routes';
 import { mapRoutes } from './modules/map/map.routes';
 import { measurementsRoutes } from './modules/measurements/measurements.routes';
 import { notesRoutes } from './modules/notes/notes.routes';
+import { photosRoutes } from './modules/photos/photos.routes';
 import { plansRoutes } from './modules/plans/plans.routes';
 import { sugarbushesRoutes } from './modules/sugarbushes/sugarbushes.routes';
 import { tapholesRoutes } from './modules/tapholes/tapholes.routes';
@@ -22,6 +23,7 @@ export function apiRoutes(ctx: AppContext) {
   router.use(measurementsRoutes(ctx));
   router.use(tapholesRoutes(ctx));
   router.use(notesRoutes(ctx));
+  router.use(photosRoutes(ctx));
   router.use(plansRoutes(ctx));
   router.use(adviceRoutes(ctx));
   router.use(mapRoutes(ctx));

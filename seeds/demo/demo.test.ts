@@ -197,7 +197,7 @@ describe('demo seed', () => {
     expect(notes.length).toBeLessThanOrEqual(50);
     for (const n of notes) expect(n.author_id).toBe(consultant.id);
     expect(new Set(notes.map((n) => n.category))).toEqual(
-      new Set(['finding', 'advice', 'follow-up', 'hazard']),
+      new Set(['health', 'tapping', 'management', 'follow-up', 'hazard']),
     );
     expect(notes.filter((n) => n.tree_id === null).length).toBeGreaterThanOrEqual(3);
     expect(

@@ -47,12 +47,12 @@ export function standNotes(plans: TreePlan[]): Omit<NoteDraft, 'createdAt'>[] {
   });
   return [
     stand(
-      'finding',
+      'health',
       `Autumn 2026 walk-through: most crowns rate 0–10 % dieback and growth is steady. The ` +
         `exceptions are listed tree by tree.`,
     ),
     stand(
-      'finding',
+      'health',
       `Since the thinning of January ${THINNING.firstSeason} (${thinning.cut} trees cut, mostly ` +
         `those crowding a better sugar maple) the trees left standing have added ` +
         `${thinning.after.toFixed(2)} cm of diameter a year, against ${thinning.before.toFixed(2)} ` +
@@ -60,18 +60,18 @@ export function standNotes(plans: TreePlan[]): Omit<NoteDraft, 'createdAt'>[] {
         `${thinning.drought.toFixed(1)} cm.`,
     ),
     stand(
-      'finding',
+      'tapping',
       `Stain showed in ${hits} of ${lastHoles.length} holes drilled in 2026 ` +
         `(${((100 * hits) / lastHoles.length).toFixed(1)} %).`,
     ),
     stand(
-      'advice',
+      'management',
       `Rest the ledge lateral (${lateral[0]} to ${lateral[lateral.length - 1]}) for 2027, then ` +
         `one tap a tree at most until growth picks up.`,
       '2027-03-01',
     ),
     stand(
-      'advice',
+      'management',
       `Keep the conservative set for 2027: none under 12 in, one from 12 to 18 in, two from 18 in.`,
     ),
     stand(

@@ -28,7 +28,7 @@ export const writers: Record<ProblemCategory, Writer> = {
     const years = Math.ceil((30.48 - d) / rate);
     return [
       note(
-        'finding',
+        'health',
         `${size(d)} DBH, under the 12 in minimum. Leave it untapped; at its present ` +
           `growth it needs roughly ${years} more seasons to reach tapping size.`,
       ),
@@ -40,12 +40,12 @@ export const writers: Record<ProblemCategory, Writer> = {
     const allowed = d < 45.72 ? 'one' : 'two';
     return [
       note(
-        'finding',
+        'health',
         `${n} holes in 2026 on a ${size(d)} trunk; the conservative set allows ${allowed}. ` +
           `It has carried three or four holes every season since 2022.`,
       ),
       note(
-        'advice',
+        'tapping',
         `Go back to ${allowed} tap${allowed === 'one' ? '' : 's'} in 2027 and watch the shavings: ` +
           `brown or yellow shavings mean the drill found stained wood.`,
       ),
@@ -60,13 +60,13 @@ export const writers: Record<ProblemCategory, Writer> = {
     const up = Math.abs(now.heightCm - before.heightCm);
     return [
       note(
-        'finding',
+        'health',
         `The 2026 hole is about ${side.toFixed(0)} cm round the trunk from the 2025 hole and ` +
           `${up < 1 ? 'level with it' : `${up.toFixed(0)} cm above or below it`} — inside last ` +
           `year's column of stained wood.`,
       ),
       note(
-        'advice',
+        'tapping',
         `Move each new hole at least 4 in round the trunk or a foot up or down from any hole ` +
           `still in reach; a rotation card on the lateral helps the crew keep track.`,
       ),
@@ -76,7 +76,7 @@ export const writers: Record<ProblemCategory, Writer> = {
     const ba = basalArea(p);
     return [
       note(
-        'finding',
+        'health',
         `Diameter gained only ${growthCmPerYear(p).toFixed(2)} cm a year since 2018: about ` +
           `${ba.grew.toFixed(1)} in² of basal area a year, against the roughly ` +
           `${ba.needed.toFixed(1)} in² even one tap needs at this size. Tapping is outrunning growth.`,
@@ -110,14 +110,14 @@ export const writers: Record<ProblemCategory, Writer> = {
   ],
   'held-out': (p) => [
     note(
-      'advice',
+      'tapping',
       `Held out since ${lastTapped(p) + 1} as an untapped comparison tree. Keep measuring it ` +
         `each autumn; its growth is the yardstick for the tapped trees around it.`,
     ),
   ],
   removed: () => [
     note(
-      'finding',
+      'health',
       `Felled in the winter of 2024–25 after it split at the fork over the main line. ` +
         `Stump left high as a marker; the tag is kept on the stump.`,
     ),
@@ -135,7 +135,7 @@ export const writers: Record<ProblemCategory, Writer> = {
     return bad
       ? [
           note(
-            'finding',
+            'health',
             `The ${bad.season} reading (${bad.dbhCm.toFixed(1)} cm) is about 2 cm under the ` +
               `seasons either side — a slipped tape, not a shrinking tree. Record a correction ` +
               `rather than deleting the row.`,
@@ -147,7 +147,7 @@ export const writers: Record<ProblemCategory, Writer> = {
     const stained = p.tapholes.filter((t) => t.stainHit).length;
     return [
       note(
-        'finding',
+        'health',
         `${p.tapholes.length} holes since 2018 on a tree adding ${growthCmPerYear(p).toFixed(2)} ` +
           `cm of diameter a year; ${stained} of them hit stained wood. Little clear wood is left ` +
           `in the tapping band.`,
@@ -156,7 +156,7 @@ export const writers: Record<ProblemCategory, Writer> = {
   },
   'outside-boundary': () => [
     note(
-      'finding',
+      'health',
       `The mapped point falls outside the stand boundary, but the tree stands inside it by ` +
         `the wall. Re-take the GPS point with a longer fix.`,
     ),
@@ -170,7 +170,7 @@ export const writers: Record<ProblemCategory, Writer> = {
   ],
   'wide-spout': () => [
     note(
-      'advice',
+      'tapping',
       `The last two seasons' holes were drilled with the old 7/16 in bit. Go back to 5/16 in: ` +
         `the wider hole stains more wood for little more sap.`,
     ),
@@ -188,7 +188,7 @@ export const writers: Record<ProblemCategory, Writer> = {
     const two = basalArea(p, 2);
     return [
       note(
-        'advice',
+        'tapping',
         `About ${one.grew.toFixed(1)} in² of basal area a year: enough for one tap ` +
           `(${one.needed.toFixed(1)} in²), not the two its size allows (${two.needed.toFixed(1)} ` +
           `in²). One tap in 2027, and thin around it to give the crown room.`,
@@ -197,7 +197,7 @@ export const writers: Record<ProblemCategory, Writer> = {
   },
   'first-reading': () => [
     note(
-      'advice',
+      'tapping',
       `First reading this autumn. One diameter says nothing of growth yet: tap it lightly, if ` +
         `at all, until a second season is on record.`,
     ),

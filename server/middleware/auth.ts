@@ -69,6 +69,47 @@ export function treeAccess(db: Knex): RequestHandler {
   };
 }
 
+/**
+ * Member of the sugarbush holding the row named by `:param` in `table` (a note, a photo), or 404
+ * for it. The row's id, stand and tree land in `res.locals.row`.
+ */
+function rowAccess(
+  db: Knex,
+  table: 'notes' | 'photos',
+  param: string,
+  what: string,
+): RequestHandler {
+  const members = membersRepository(db);
+  return async (req, res, next) => {
+    const user = currentUser(req);
+    const id = idParam(req.params[param], what);
+    const row = await db(table).where({ id }).first('id', 'sugarbush_id', 'tree_id');
+    const role = row ? await members.roleOf(user.id, row.sugarbush_id) : null;
+    if (!row || !role) throw new AppError(404, 'not-found', `${what} not found`);
+    res.locals.access = { sugarbushId: row.sugarbush_id, role, userId: user.id } satisfies Access;
+    res.locals.row = {
+      id,
+      sugarbushId: Number(row.sugarbush_id),
+      treeId: row.tree_id === null ? null : Number(row.tree_id),
+    } satisfies AccessedRow;
+    next();
+  };
+}
+
+export interface AccessedRow {
+  id: number;
+  sugarbushId: number;
+  treeId: number | null;
+}
+
+export const rowOf = (res: Response) => res.locals.row as AccessedRow;
+
+/** Member of the stand holding the note in `:noteId`, or 404 for the note. */
+export const noteAccess = (db: Knex) => rowAccess(db, 'notes', 'noteId', 'Note');
+
+/** Member of the stand holding the photo in `:photoId`, or 404 for the photo. */
+export const photoAccess = (db: Knex) => rowAccess(db, 'photos', 'photoId', 'Photo');
+
 /** The member's role must allow the action (the table in shared/schemas/permissions.ts), else 403. */
 export function requirePermission(action: Permission): RequestHandler {
   return (_req, res, next) => {

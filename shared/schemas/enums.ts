@@ -42,6 +42,18 @@ export const collections = ['bucket', 'gravity', 'vacuum'] as const;
 export const collectionSchema = z.enum(collections);
 export type Collection = z.infer<typeof collectionSchema>;
 
-export const noteCategories = ['finding', 'advice', 'follow-up', 'hazard'] as const;
+/**
+ * What a note is about. A hazard is for whoever works at the tree: it travels with the plan until
+ * it is resolved. (Notes written before these names: `finding` became `health`, `advice` became
+ * `tapping` on a tree and `management` on the whole stand.)
+ */
+export const noteCategories = ['health', 'hazard', 'tapping', 'management', 'follow-up'] as const;
 export const noteCategorySchema = z.enum(noteCategories);
 export type NoteCategory = z.infer<typeof noteCategorySchema>;
+export const noteCategoryLabels: Record<NoteCategory, string> = {
+  health: 'Tree health',
+  hazard: 'Hazard',
+  tapping: 'Tapping advice',
+  management: 'Stand management',
+  'follow-up': 'Follow-up',
+};

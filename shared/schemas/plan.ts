@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { Advice, GuidelineRule, PlanTotals, ProfileSpacing } from '../rules/index';
 import { listQuerySchema } from './list-query';
+import type { Hazard } from './note';
 
 /**
  * The season a plan is for: tapping runs late winter, so from June on the next season is the one
@@ -50,11 +51,15 @@ export interface TreeAdvice extends Advice {
   tag: string;
   season: number;
   profile: ProfileSummary;
+  /** The tree's unresolved hazard notes: whoever works at the tree reads them first. */
+  hazards: Hazard[];
 }
 
 export interface PlanItem extends Omit<Advice, 'projection' | 'holesInReach'> {
   treeId: number;
   tag: string;
+  /** The tree's unresolved hazard notes, oldest first. */
+  hazards: Hazard[];
 }
 
 export interface StandPlanResponse {

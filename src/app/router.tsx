@@ -7,7 +7,7 @@ import { RouteError } from './route-error';
 import { AppShell } from './shell/app-shell';
 import type { SectionHandle } from './shell/sections';
 
-const planned: SectionKey[] = ['round', 'overview', 'notes', 'season'];
+const planned: SectionKey[] = ['round', 'overview', 'season'];
 
 const handle = (section: SectionKey): SectionHandle => ({ section });
 
@@ -104,6 +104,11 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               lazy: async () => ({
                 Component: (await import('./routes/woods-map')).WoodsMapRoute,
               }),
+            },
+            {
+              path: paths.notes.path,
+              handle: handle('notes'),
+              lazy: async () => ({ Component: (await import('./routes/notes')).NotesRoute }),
             },
             {
               path: paths.settings.path,

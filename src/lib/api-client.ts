@@ -81,7 +81,9 @@ async function toApiError(response: Response): Promise<ApiError> {
 async function request<T>(path: string, options: RequestOptions = {}, retried = false): Promise<T> {
   const method = options.method ?? 'GET';
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  // A form (a file upload) sets its own multipart type and boundary.
+  const form = options.body instanceof FormData ? options.body : undefined;
+  if (options.body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (method !== 'GET') headers['x-csrf-token'] = await getCsrfToken();
 
   let response: Response;
@@ -89,7 +91,7 @@ async function request<T>(path: string, options: RequestOptions = {}, retried = 
     response = await fetch(buildUrl(path, options.query), {
       method,
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: form ?? (options.body === undefined ? undefined : JSON.stringify(options.body)),
       credentials: 'same-origin',
       signal: options.signal,
     });
@@ -120,5 +122,7 @@ export const api = {
     request<T>(path, { ...options, method: 'GET' }),
   post: <T>(path: string, body?: unknown) => request<T>(path, { method: 'POST', body }),
   patch: <T>(path: string, body?: unknown) => request<T>(path, { method: 'PATCH', body }),
+  /** A multipart form, such as a photo in the field `file`. */
+  postForm: <T>(path: string, form: FormData) => request<T>(path, { method: 'POST', body: form }),
   delete: <T>(path: string) => request<T>(path, { method: 'DELETE' }),
 };

@@ -9,4 +9,6 @@ export const queryRoots = {
   trees: ['trees'],
   plans: ['plans'],
   map: ['map'],
+  /** Notes, their photos and the needs-a-look queue. */
+  notes: ['notes'],
 } as const;

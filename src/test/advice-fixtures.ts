@@ -53,6 +53,7 @@ export const planItem = (overrides: Partial<PlanItem> = {}): PlanItem => ({
     },
   ],
   frozen: null,
+  hazards: [],
   ...overrides,
 });
 

@@ -33,7 +33,7 @@ export function mockApi(routes: Record<string, unknown>) {
       method,
       url,
       headers: new Headers(init?.headers),
-      body: typeof init?.body === 'string' ? JSON.parse(init.body) : undefined,
+      body: typeof init?.body === 'string' ? JSON.parse(init.body) : (init?.body ?? undefined),
     };
     requests.push(request);
     const route = table[`${method} ${url.pathname}`];

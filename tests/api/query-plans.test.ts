@@ -124,6 +124,57 @@ describeOnSqlite('query plans of the hot reads', () => {
     }
   });
 
+  it('when the notes lists and the needs-a-look queue are read, in each order and filter, then no statement walks a whole table', async () => {
+    const consultantId = (await t.db('users').where({ email: team.users.consultant }).first()).id;
+    await t.db('notes').insert([
+      {
+        sugarbush_id: team.standId,
+        tree_id: treeId,
+        author_id: consultantId,
+        category: 'hazard',
+        body: 'Hanger',
+      },
+      {
+        sugarbush_id: team.standId,
+        tree_id: treeId,
+        author_id: consultantId,
+        category: 'follow-up',
+        body: 'Tape it',
+        follow_up_on: '2026-01-10',
+      },
+      {
+        sugarbush_id: team.standId,
+        tree_id: null,
+        author_id: consultantId,
+        category: 'management',
+        body: 'Thin',
+      },
+    ]);
+    const urls = [
+      ...[
+        '',
+        '&sort=followUp',
+        '&category=hazard',
+        '&followUp=due',
+        '&status=open',
+        '&scope=stand',
+        '&q=tape',
+      ].map((query) => `/api/sugarbushes/${team.standId}/notes?page=1&pageSize=50${query}`),
+      `/api/trees/${treeId}/notes`,
+      ...[
+        '',
+        '&sort=tag',
+        '&sort=followUp',
+        '&reason=hazard',
+        '&reason=due',
+        '&warning=slow-growth',
+        '&q=Q-0',
+      ].map((query) => `/api/sugarbushes/${team.standId}/attention?page=1&pageSize=50${query}`),
+    ];
+    for (const url of urls)
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+  });
+
   it('when the woods map, the stand figures or the advice status are read, then no statement walks a whole table', async () => {
     for (const path of ['map', 'figures', 'advice-status']) {
       const url = `/api/sugarbushes/${team.standId}/${path}`;

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import sharp from 'sharp';
 import type { Role } from '../../shared/schemas/enums';
 import { addMember, addUser, makeTestApp, signIn, standWithTeam } from './test-app';
 
@@ -6,15 +7,26 @@ type Who = Role | 'outsider';
 interface RouteCase {
   name: string;
   method: 'get' | 'post' | 'patch';
-  path: (ids: { standId: number; treeId: number; memberId: number }) => string;
+  path: (ids: Ids) => string;
   body?: () => Record<string, unknown>;
+  /** A multipart upload of this file in the field `file`, instead of a JSON body. */
+  upload?: () => { bytes: Buffer; filename: string };
   /** Who may; every other member gets 403, the outsider 404. */
   allowed: Role[];
   /** The status of an allowed request, when not 200 (GET, PATCH) or 201 (POST). */
   okStatus?: number;
 }
 
+interface Ids {
+  standId: number;
+  treeId: number;
+  memberId: number;
+  noteId: number;
+  photoId: number;
+}
+
 const everyone: Role[] = ['owner', 'forester', 'tapper', 'consultant'];
+let photo: Buffer;
 let n = 0;
 const cases: RouteCase[] = [
   {
@@ -181,13 +193,59 @@ const cases: RouteCase[] = [
     name: 'write a note',
     method: 'post',
     path: (i) => `/api/trees/${i.treeId}/notes`,
-    body: () => ({ category: 'finding', body: 'Frost crack on the north face.' }),
+    body: () => ({ category: 'health', body: 'Frost crack on the north face.' }),
     allowed: ['owner', 'consultant'],
+  },
+  {
+    name: 'write a note on the stand',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/notes`,
+    body: () => ({ category: 'management', body: 'Thin the beech by the east lateral.' }),
+    allowed: ['owner', 'consultant'],
+  },
+  {
+    name: 'resolve or reopen a note',
+    method: 'patch',
+    path: (i) => `/api/notes/${i.noteId}`,
+    body: () => ({ resolved: ++n % 2 === 0 }),
+    allowed: ['owner', 'consultant'],
+  },
+  {
+    name: 'read the needs-a-look queue',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/attention`,
+    allowed: everyone,
+  },
+  {
+    name: 'add a photo to a tree',
+    method: 'post',
+    path: (i) => `/api/trees/${i.treeId}/photos`,
+    upload: () => ({ bytes: photo, filename: 'trunk.png' }),
+    allowed: ['owner', 'consultant'],
+  },
+  {
+    name: 'add a photo to a note',
+    method: 'post',
+    path: (i) => `/api/notes/${i.noteId}/photos`,
+    upload: () => ({ bytes: photo, filename: 'crack.png' }),
+    allowed: ['owner', 'consultant'],
+  },
+  {
+    name: 'list a tree’s photos',
+    method: 'get',
+    path: (i) => `/api/trees/${i.treeId}/photos`,
+    allowed: everyone,
+  },
+  {
+    name: 'see a photo',
+    method: 'get',
+    path: (i) => `/api/photos/${i.photoId}`,
+    allowed: everyone,
   },
 ];
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
-let ids: { standId: number; treeId: number; memberId: number };
+let ids: Ids;
 const agents = {} as Record<Who, Awaited<ReturnType<typeof signIn>>>;
 
 beforeAll(async () => {
@@ -195,9 +253,27 @@ beforeAll(async () => {
   const team = await standWithTeam(t.db);
   const memberId = await addUser(t.db, 'second-tapper@test.example');
   await addMember(t.db, memberId, team.standId, 'tapper');
-  ids = { standId: team.standId, treeId: team.treeId, memberId };
   for (const who of [...everyone, 'outsider'] as Who[])
     agents[who] = await signIn(t.app, team.users[who]);
+  photo = await sharp({ create: { width: 16, height: 16, channels: 3, background: '#3f6b4a' } })
+    .png()
+    .toBuffer();
+  const { agent, csrf } = agents.consultant;
+  const note = await agent
+    .post(`/api/trees/${team.treeId}/notes`)
+    .set('x-csrf-token', csrf)
+    .send({ category: 'hazard', body: 'Hanger over the lateral.' });
+  const stored = await agent
+    .post(`/api/trees/${team.treeId}/photos`)
+    .set('x-csrf-token', csrf)
+    .attach('file', photo, 'first.png');
+  ids = {
+    standId: team.standId,
+    treeId: team.treeId,
+    memberId,
+    noteId: note.body.id,
+    photoId: stored.body.id,
+  };
 });
 afterAll(() => t.close());
 
@@ -205,7 +281,10 @@ describe.each(cases)('$name', (c) => {
   it.each([...everyone, 'outsider'] as Who[])('as %s', async (who) => {
     const { agent, csrf } = agents[who];
     let req = agent[c.method](c.path(ids));
-    if (c.method !== 'get') req = req.set('x-csrf-token', csrf).send(c.body!());
+    if (c.upload) {
+      const { bytes, filename } = c.upload();
+      req = req.set('x-csrf-token', csrf).attach('file', bytes, filename);
+    } else if (c.method !== 'get') req = req.set('x-csrf-token', csrf).send(c.body!());
     const res = await req;
     const expected =
       who === 'outsider'

@@ -15,7 +15,11 @@ export const PASSWORD = 'correct-horse-battery';
 /** The environment that points an app at this test database. */
 export function databaseEnv({ target, dir }: TestDatabase): Record<string, string> {
   return target.client === 'pg'
-    ? { DATABASE_URL: target.url, BASEMAP_DIR: path.join(dir, 'basemaps') }
+    ? {
+        DATABASE_URL: target.url,
+        BASEMAP_DIR: path.join(dir, 'basemaps'),
+        PHOTO_DIR: path.join(dir, 'photos'),
+      }
     : { DATABASE_FILE: target.filename };
 }
 
@@ -39,6 +43,7 @@ export async function makeTestApp(env: Record<string, string> = {}, database?: T
   const close = async () => {
     await app.ctx.background.idle();
     await app.ctx.advice.close();
+    app.ctx.photos.close();
     await db.destroy();
   };
   return { app, db, config, database: own, ctx: app.ctx, close };

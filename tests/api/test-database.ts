@@ -51,10 +51,26 @@ afterAll(async () => {
   pools.clear();
   if (!admin) return;
   const client = await admin;
-  while (made.length) await client.query(`drop database if exists ${made.pop()} with (force)`);
+  while (made.length) await dropDatabase(client, made.pop()!);
   admin = undefined;
   await client.end();
 });
+
+/**
+ * `with (force)` may not end an autovacuum worker busy in the database for a role that is not a
+ * superuser (SQLSTATE 42501): such a worker finishes in moments, so try again a few times.
+ */
+async function dropDatabase(client: pg.Client, name: string) {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await client.query(`drop database if exists ${name} with (force)`);
+      return;
+    } catch (err) {
+      if ((err as { code?: string }).code !== '42501' || attempt >= 10) throw err;
+      await new Promise((resolve) => setTimeout(resolve, 200 * attempt));
+    }
+  }
+}
 
 function adminClient(): Promise<pg.Client> {
   admin ??= (async () => {

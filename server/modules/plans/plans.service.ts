@@ -17,6 +17,7 @@ import { keptByStamp } from '../../lib/kept-by-stamp';
 import { adviceRepository } from '../advice/advice.repository';
 import { profileOf } from '../advice/stand-guideline';
 import { loadStandTrees } from './plans.repository';
+import { notesRepository } from '../notes/notes.repository';
 
 const summary = (p: GuidelineProfile, notice: string | null): ProfileSummary => ({
   key: p.key,
@@ -34,6 +35,7 @@ const summary = (p: GuidelineProfile, notice: string | null): ProfileSummary => 
 
 export function plansService(ctx: AppContext) {
   const store = adviceRepository(ctx.db);
+  const notes = notesRepository(ctx.db);
   async function standRow(sugarbushId: number) {
     const row = await ctx
       .db('sugarbushes')
@@ -104,8 +106,9 @@ export function plansService(ctx: AppContext) {
     };
   }
 
-  const treeAdvice = new Map<string, Promise<TreeAdvice>>();
-  function keepTreeAdvice(key: string, work: () => Promise<TreeAdvice>): Promise<TreeAdvice> {
+  type KeptAdvice = Omit<TreeAdvice, 'hazards'>;
+  const treeAdvice = new Map<string, Promise<KeptAdvice>>();
+  function keepTreeAdvice(key: string, work: () => Promise<KeptAdvice>): Promise<KeptAdvice> {
     let value = treeAdvice.get(key);
     if (!value) {
       value = work();
@@ -114,6 +117,18 @@ export function plansService(ctx: AppContext) {
       while (treeAdvice.size > 500) treeAdvice.delete(treeAdvice.keys().next().value!);
     }
     return value;
+  }
+
+  async function adviceFromRecord(
+    sugarbushId: number,
+    treeId: number,
+    season: number,
+  ): Promise<KeptAdvice> {
+    const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
+    const [tree] = await loadStandTrees(ctx.db, sugarbushId, treeId);
+    if (!tree) throw new AppError(404, 'not-found', 'Tree not found');
+    const advice = adviseTree(tree, { season, profile, sunnyAzimuthDeg, withProjection: true });
+    return { ...advice, treeId: tree.id, tag: tree.tag, season, profile: summary(profile, notice) };
   }
 
   async function complete(sugarbushId: number, season: number, version: number, stamp: string) {
@@ -141,19 +156,12 @@ export function plansService(ctx: AppContext) {
       ]);
       if (!versions) throw new AppError(404, 'not-found', 'Tree not found');
       const key = `${treeId}:${versions.record_version}:${stand?.advice_version}:${season}`;
-      return keepTreeAdvice(key, async () => {
-        const { profile, sunnyAzimuthDeg, notice } = await standSettings(sugarbushId);
-        const [tree] = await loadStandTrees(ctx.db, sugarbushId, treeId);
-        if (!tree) throw new AppError(404, 'not-found', 'Tree not found');
-        const advice = adviseTree(tree, { season, profile, sunnyAzimuthDeg, withProjection: true });
-        return {
-          ...advice,
-          treeId: tree.id,
-          tag: tree.tag,
-          season,
-          profile: summary(profile, notice),
-        };
-      });
+      // Hazard notes change without the record: read each time, beside the kept advice.
+      const [advice, hazards] = await Promise.all([
+        keepTreeAdvice(key, () => adviceFromRecord(sugarbushId, treeId, season)),
+        notes.openHazards([treeId]),
+      ]);
+      return { ...advice, hazards: hazards.get(treeId) ?? [] };
     },
 
     /** The season's plan under another guideline, against today's, before the owner saves it. */
@@ -205,9 +213,13 @@ export function plansService(ctx: AppContext) {
         page: q.page,
         pageSize: q.pageSize,
       };
+      // The page's trees' open hazard notes, in one query: the tapper reads them at the tree.
+      const hazards = await notes.openHazards(page.items.map((i) => i.treeId));
       const items = page.items.map(
-        // The payload is an object's JSON: close it with the two fields every item carries.
-        (i) => `${i.payload.slice(0, -1)},"treeId":${i.treeId},"tag":${JSON.stringify(i.tag)}}`,
+        // The payload is an object's JSON: close it with the fields every item carries.
+        (i) =>
+          `${i.payload.slice(0, -1)},"treeId":${i.treeId},"tag":${JSON.stringify(i.tag)},` +
+          `"hazards":${JSON.stringify(hazards.get(i.treeId) ?? [])}}`,
       );
       return `${JSON.stringify(head).slice(0, -1)},"items":[${items.join(',')}]}`;
     },

@@ -1,5 +1,7 @@
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Link, useParams } from 'react-router';
+import { Link, useParams, useSearchParams } from 'react-router';
+import { HazardNotice } from '@/components/hazard-notice';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
@@ -7,6 +9,7 @@ import { paths } from '@/config/paths';
 import { AdviceCard, type AdvisedSpot } from '@/features/advice/components/advice-card';
 import { DiameterHistory } from '@/features/measurements/components/diameter-history';
 import { MeasurementForm } from '@/features/measurements/components/measurement-form';
+import { TreeNoteForm, TreeNotes } from '@/features/notes/components/tree-notes';
 import { TapholeForm, type SpotRequest } from '@/features/tapholes/components/taphole-form';
 import { TapholeList } from '@/features/tapholes/components/taphole-list';
 import { TappingCaution } from '@/features/trees/components/tapping-caution';
@@ -14,6 +17,8 @@ import { TreeHeader } from '@/features/trees/components/tree-header';
 import { isApiError } from '@/lib/api-client';
 import { can, useRole } from '@/lib/auth';
 import { useTree } from '@/lib/get-tree';
+import { treeAdviceQueryOptions } from '@/lib/get-tree-advice';
+import { parseSeason } from '@/lib/season';
 
 export function TreeRoute() {
   const { treeId: param } = useParams();
@@ -21,6 +26,12 @@ export function TreeRoute() {
   const valid = Number.isInteger(treeId) && treeId > 0;
   const tree = useTree(valid ? treeId : undefined);
   const role = useRole(tree.data?.sugarbushId);
+  const [search] = useSearchParams();
+  // The advice card's own query: its hazards are the tree's open hazard notes.
+  const advice = useQuery({
+    ...treeAdviceQueryOptions(treeId, parseSeason(search.get('season'))),
+    enabled: valid,
+  });
   // "Use this spot" on the advice card fills the taphole form; each click counts as a new request.
   const [spot, setSpot] = useState<SpotRequest>();
   const fillSpot = (next: AdvisedSpot) =>
@@ -57,10 +68,13 @@ export function TreeRoute() {
 
   const canRecord = can(role, 'record-measurements');
   const canTap = can(role, 'record-tapholes');
+  const canWriteNotes = can(role, 'write-notes');
   return (
     <>
       <title>{`Tree ${tree.data.tag} · Clearwood`}</title>
       <TreeHeader tree={tree.data} />
+      {/* A hazard at the tree is read before any drilling advice. */}
+      <HazardNotice hazards={advice.data?.hazards} className="mb-6 text-base" />
       <div className="grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         {/* On a phone the work comes first: the advice, then the form; the record follows. */}
         <div className="flex min-w-0 flex-col gap-6 lg:order-2">
@@ -77,10 +91,12 @@ export function TreeRoute() {
             </>
           )}
           {canRecord && <MeasurementForm treeId={treeId} />}
+          {canWriteNotes && <TreeNoteForm treeId={treeId} />}
         </div>
         <div className="flex min-w-0 flex-col gap-8 lg:order-1">
           <DiameterHistory treeId={treeId} canRecord={canRecord} />
           <TapholeList treeId={treeId} />
+          <TreeNotes treeId={treeId} tag={tree.data.tag} canWrite={canWriteNotes} />
         </div>
       </div>
     </>

@@ -54,7 +54,7 @@ export const sections: readonly Section[] = [
     label: 'Notes',
     shortLabel: 'Notes',
     permission: 'read',
-    summary: 'Findings, advice and hazards written for the stand and for single trees.',
+    summary: 'Trees that need a look, and notes and photos on the stand and its trees.',
   },
   {
     key: 'season',

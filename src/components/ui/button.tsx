@@ -1,4 +1,4 @@
-import type { ButtonHTMLAttributes } from 'react';
+import type { ButtonHTMLAttributes, Ref } from 'react';
 import { cn } from './cn';
 
 type Variant = 'primary' | 'secondary' | 'quiet';
@@ -13,6 +13,7 @@ export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   variant?: Variant;
   /** Full width on phones, natural width from the md breakpoint. */
   block?: boolean;
+  ref?: Ref<HTMLButtonElement>;
 }
 
 export function Button({

@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { Fragment, type ReactNode } from 'react';
 import { cn } from './cn';
 
 export type SortDirection = 'asc' | 'desc';
@@ -29,6 +29,8 @@ interface DataTableProps<Row> {
   rowClassName?: (row: Row) => string | undefined;
   /** Dims the rows while a newer page loads. */
   stale?: boolean;
+  /** Something to read before a row (a hazard at the tree), as a full-width row above it. */
+  rowLead?: (row: Row) => ReactNode;
 }
 
 const ariaSort = (column: { sortField?: string }, sort?: TableSort) => {
@@ -46,6 +48,7 @@ export function DataTable<Row>({
   onSort,
   rowClassName,
   stale = false,
+  rowLead,
 }: DataTableProps<Row>) {
   return (
     <div className="overflow-x-auto">
@@ -92,22 +95,34 @@ export function DataTable<Row>({
           </tr>
         </thead>
         <tbody>
-          {rows.map((row) => (
-            <tr key={rowKey(row)} className={cn('border-b border-rule', rowClassName?.(row))}>
-              {columns.map((column) => (
-                <td
-                  key={column.key}
-                  className={cn(
-                    'px-3 py-2 align-top',
-                    column.align === 'right' && 'whitespace-nowrap text-right',
-                    column.className,
-                  )}
-                >
-                  {column.cell(row)}
-                </td>
-              ))}
-            </tr>
-          ))}
+          {rows.map((row) => {
+            const lead = rowLead?.(row);
+            return (
+              <Fragment key={rowKey(row)}>
+                {lead && (
+                  <tr className={cn('print:break-inside-avoid', rowClassName?.(row))}>
+                    <td colSpan={columns.length} className="px-3 pt-2">
+                      {lead}
+                    </td>
+                  </tr>
+                )}
+                <tr className={cn('border-b border-rule', rowClassName?.(row))}>
+                  {columns.map((column) => (
+                    <td
+                      key={column.key}
+                      className={cn(
+                        'px-3 py-2 align-top',
+                        column.align === 'right' && 'whitespace-nowrap text-right',
+                        column.className,
+                      )}
+                    >
+                      {column.cell(row)}
+                    </td>
+                  ))}
+                </tr>
+              </Fragment>
+            );
+          })}
         </tbody>
       </table>
     </div>

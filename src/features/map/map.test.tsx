@@ -52,6 +52,33 @@ describe('the woods map', () => {
     );
   });
 
+  it('when the chosen tree has an open hazard note, then the card shows its text before the taps and where to drill', async () => {
+    const { user } = openMap({
+      routes: {
+        'GET /api/trees/1/advice': {
+          ...cardRoutes['GET /api/trees/1/advice'],
+          hazards: [
+            {
+              noteId: 5,
+              body: 'Dead limb hangs over the drop line.',
+              createdAt: '2026-10-14T14:10:00Z',
+            },
+          ],
+        },
+      },
+    });
+    await user.click(await screen.findByRole('button', { name: 'Marker 0412' }));
+    const card = await screen.findByRole('region', { name: 'Tree 0412' });
+    const hazard = await within(card).findByRole('complementary', { name: 'Hazard at this tree' });
+    expect(hazard).toHaveTextContent('Dead limb hangs over the drop line.');
+    const where = await within(card).findByRole('list', { name: 'Where to drill' });
+    const taps = within(card).getByText('Tap 2 times');
+    for (const advice of [where, taps])
+      expect(
+        hazard.compareDocumentPosition(advice) & Node.DOCUMENT_POSITION_FOLLOWING,
+      ).toBeTruthy();
+  });
+
   it("when a tree is chosen, then the card shows the map's advice at once and only then asks for the tree and its advice for the map's season, saying it is loading", async () => {
     let release!: () => void;
     const held = new Promise<void>((resolve) => (release = resolve));

@@ -14,6 +14,8 @@ function openTreeAs(
 ) {
   const api = mockApi({
     'GET /api/auth/me': meAs(role, unitSystem),
+    'GET /api/trees/7/notes': page([]),
+    'GET /api/trees/7/photos': page([]),
     'GET /api/trees/7': tree(),
     'GET /api/trees/7/measurements': page(
       [

@@ -68,6 +68,28 @@ describe('the season plan', () => {
     expect(screen.getByText('1–50 of 1,187')).toBeInTheDocument();
   });
 
+  it('when a tree has an open hazard note, then its text shows on the tree’s row ahead of where to drill', async () => {
+    const hazardous = planItem({
+      treeId: 9,
+      tag: '0414',
+      hazards: [
+        { noteId: 3, body: 'Hornets in the crotch at 2 m.', createdAt: '2026-10-12T14:10:00Z' },
+      ],
+    });
+    openPlan({
+      [PLAN]: () => ({ status: 200, body: standPlan([items[0], hazardous]) }),
+    });
+    const table = await screen.findByRole('table', { name: 'Season plan' });
+    const hazard = within(table).getByRole('complementary', { name: 'Hazard at tree 0414' });
+    expect(hazard).toHaveTextContent('Hornets in the crotch at 2 m.');
+    const row = within(table).getByRole('link', { name: '0414' }).closest('tr')!;
+    expect(within(row).getByText('Hazard')).toBeInTheDocument();
+    const where = within(row).getByText('S 1.10 m · N 0.80 m');
+    expect(hazard.compareDocumentPosition(where) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
+    // The tree without one has no notice.
+    expect(within(table).queryByRole('complementary', { name: 'Hazard at tree 0412' })).toBeNull();
+  });
+
   // Quebec: tap once a year between 1 January and 30 April; spouts out by 1 June
   // (A-18.1 r.8.1 s.24 — P).
   it('under a guideline with rules for the season, shows them with the plan and the notice of a changed rule', async () => {

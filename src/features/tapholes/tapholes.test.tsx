@@ -23,6 +23,8 @@ function openTreeAs(
     'GET /api/trees/7': tree(),
     'GET /api/sugarbushes/3': sugarbush({ role }),
     'GET /api/trees/7/measurements': page([]),
+    'GET /api/trees/7/notes': page([]),
+    'GET /api/trees/7/photos': page([]),
     // Last season's hole, west and low: clear of both advised spots (south 110 cm, north 80 cm).
     [TAPHOLES]: page([taphole({ id: 1, season: 2026, azimuthDeg: 270, heightCm: 70 })]),
     [ADVICE]: treeAdvice(),

@@ -1,5 +1,6 @@
 import { Link } from 'react-router';
 import { speciesLabels } from '@shared/schemas/enums';
+import { HazardNotice } from '@/components/hazard-notice';
 import { TreeStatusLabel } from '@/components/tree-status-label';
 import { Button } from '@/components/ui/button';
 import { VerdictBadge } from '@/components/verdict-badge';
@@ -62,6 +63,8 @@ export function TreeCard({
           ✕
         </Button>
       </div>
+      {/* A hazard at the tree comes before anything about tapping it. */}
+      <HazardNotice hazards={details.advice.data?.hazards} className="mt-2" />
       <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5 text-sm">
         <dt className="font-bold">Species</dt>
         <dd>{speciesLabels[tree.species]}</dd>

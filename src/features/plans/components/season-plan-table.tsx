@@ -1,5 +1,6 @@
 import { Link } from 'react-router';
 import type { PlanItem } from '@shared/schemas/plan';
+import { HazardNotice } from '@/components/hazard-notice';
 import { DataTable, type Column, type TableSort } from '@/components/ui/data-table';
 import { VerdictBadge } from '@/components/verdict-badge';
 import { WarningChip } from '@/components/warning-chip';
@@ -22,12 +23,19 @@ const columns = (season: number, system: UnitSystem): Column<PlanItem>[] => {
       header: 'Tag',
       sortField: 'tag',
       cell: (item) => (
-        <Link
-          to={paths.tree.href(item.treeId, { season: seasonParam(season) })}
-          className="whitespace-nowrap font-bold underline underline-offset-4"
-        >
-          {item.tag}
-        </Link>
+        <span className="inline-flex items-center gap-1.5 whitespace-nowrap">
+          <Link
+            to={paths.tree.href(item.treeId, { season: seasonParam(season) })}
+            className="font-bold underline underline-offset-4"
+          >
+            {item.tag}
+          </Link>
+          {(item.hazards?.length ?? 0) > 0 && (
+            <span className="rounded bg-alert px-1 text-xs font-bold text-paper print:border print:border-ink print:bg-transparent print:text-ink">
+              Hazard
+            </span>
+          )}
+        </span>
       ),
     },
     {
@@ -103,6 +111,10 @@ export function SeasonPlanTable({
       sort={sort}
       onSort={onSort}
       stale={stale}
+      // A hazard at the tree is read before its drilling advice.
+      rowLead={(item) =>
+        item.hazards?.length ? <HazardNotice hazards={item.hazards} tag={item.tag} /> : null
+      }
       rowClassName={(item) =>
         item.verdict === 'retired'
           ? 'text-bark print:break-inside-avoid'
