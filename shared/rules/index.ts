@@ -127,6 +127,12 @@ export {
   type PlanTotals,
   type StandPlan,
 } from './plan-stand';
+export {
+  seasonCompliance,
+  complianceFindings,
+  type ComplianceFinding,
+  type SeasonCompliance,
+} from './season-compliance';
 export { verdicts, verdictByKey, type VerdictKey, type Verdict } from './verdicts';
 export { warningCodes, bitWords, type WarningCode, type AdvisorWarning } from './warnings';
 export { sources } from './sources';
