@@ -7,6 +7,8 @@ import type { Logger } from '../../lib/logger';
 import type { AdviceStatus } from '../../../shared/schemas/advice-status';
 import type { PlanTotals } from '../../../shared/rules/index';
 import { adviceRepository, type PlanFilter } from './advice.repository';
+import type { EvaluatedTree, GuidelineChoice } from '../compliance/compliance-task';
+import type { TrendResult } from '../trends/stand-trends';
 import type { AdviceTask, PlannedTree } from './advice-worker-tasks';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
@@ -33,11 +35,21 @@ export interface AdviceJobs {
     filter: PlanFilter & { sort?: string },
   ): Promise<number[]>;
   /** Every tree's taps and verdict under another guideline, computed in a worker, not stored. */
-  planWith(
+  planWith(sugarbushId: number, season: number, guideline: GuidelineChoice): Promise<PlannedTree[]>;
+  /** Every tree tapped in a season held against each guideline, in a worker, not stored. */
+  compliance(
     sugarbushId: number,
     season: number,
-    guideline: { profile: string; customJson: string | null },
-  ): Promise<PlannedTree[]>;
+    guidelines: GuidelineChoice[],
+  ): Promise<EvaluatedTree[]>;
+  /** Seasons with a measurement or a taphole of the stand on record (read in a worker). */
+  recordedSeasons(sugarbushId: number): Promise<number[]>;
+  /** The stand's figures season by season from each season's stored rows, in a worker. */
+  trends(
+    sugarbushId: number,
+    seasons: { season: number; standVersion: number }[],
+    upcoming: number,
+  ): Promise<TrendResult>;
   close(): Promise<void>;
 }
 
@@ -167,6 +179,18 @@ export function createAdviceJobs(opts: {
 
     planWith(sugarbushId, season, guideline) {
       return task<PlannedTree[]>({ kind: 'plan-with', sugarbushId, season, guideline });
+    },
+
+    compliance(sugarbushId, season, guidelines) {
+      return task<EvaluatedTree[]>({ kind: 'compliance', sugarbushId, season, guidelines });
+    },
+
+    recordedSeasons(sugarbushId) {
+      return task<number[]>({ kind: 'recorded-seasons', sugarbushId });
+    },
+
+    trends(sugarbushId, seasons, upcoming) {
+      return task<TrendResult>({ kind: 'trends', sugarbushId, seasons, upcoming });
     },
 
     async close() {

@@ -2,7 +2,15 @@ import type { Knex } from 'knex';
 import type { DatabaseTarget } from '../../config';
 import { openDb } from '../../db';
 import { adviseTree, type PlanTotals } from '../../../shared/rules/index';
+import {
+  evaluateCompliance,
+  type EvaluatedTree,
+  type GuidelineChoice,
+} from '../compliance/compliance-task';
 import { loadStandTrees } from '../plans/plans.repository';
+import type { TrendResult } from '../trends/stand-trends';
+import { computeTrends } from '../trends/trends-task';
+import { trendsRepository } from '../trends/trends.repository';
 import { adviceRepository, type PlanFilter } from './advice.repository';
 import { adviseAndStore } from './advise-and-store';
 import { profileOf, standGuideline } from './stand-guideline';
@@ -25,7 +33,17 @@ export type AdviceTask =
   /** The ids of the current rows matching a filter, in a sort's order. */
   | (OnStand & { kind: 'order'; standVersion: number; filter: PlanFilter & { sort?: string } })
   /** Every tree under another guideline, answered and not stored (a preview). */
-  | (OnStand & { kind: 'plan-with'; guideline: { profile: string; customJson: string | null } });
+  | (OnStand & { kind: 'plan-with'; guideline: GuidelineChoice })
+  /** Every tree tapped in the season, held against each guideline (not stored). */
+  | (OnStand & { kind: 'compliance'; guidelines: GuidelineChoice[] })
+  /** Seasons with a measurement or a taphole of the stand on record. */
+  | (Omit<OnStand, 'season'> & { kind: 'recorded-seasons' })
+  /** The stand's figures season by season from its record and each season's stored advice. */
+  | (Omit<OnStand, 'season'> & {
+      kind: 'trends';
+      seasons: { season: number; standVersion: number }[];
+      upcoming: number;
+    });
 
 /** One tree's answer under a guideline that is not (yet) the stand's: what a preview compares. */
 export interface PlannedTree {
@@ -53,8 +71,14 @@ function dbFor(target: DatabaseTarget): Knex {
 
 export async function runAdviceTask(
   task: AdviceTask,
-): Promise<number[] | number | PlannedTree[] | PlanTotals> {
+): Promise<number[] | number | PlannedTree[] | PlanTotals | EvaluatedTree[] | TrendResult> {
   const db = dbFor(task.database);
+  if (task.kind === 'recorded-seasons')
+    return trendsRepository(db).recordedSeasons(task.sugarbushId);
+  if (task.kind === 'trends')
+    return computeTrends(db, task.sugarbushId, task.seasons, task.upcoming);
+  if (task.kind === 'compliance')
+    return evaluateCompliance(db, task.sugarbushId, task.season, task.guidelines);
   if (task.kind === 'stale')
     return adviceRepository(db).staleTreeIds(task.sugarbushId, task.season, task.standVersion);
   if (task.kind === 'totals')
