@@ -137,6 +137,21 @@ describe("the demo stand's trends", () => {
     close(trends.areaAcres, figures.areaAcres);
   });
 
+  it('links each conductive-share band to the plan: the plan filtered by a band lists the trees it counts', async () => {
+    for (const item of [trends.items.at(-2)!, trends.items.at(-1)!]) {
+      for (const [band, trees] of Object.entries(item.shareBands)) {
+        const plan = await owner.agent.get(
+          `/api/sugarbushes/${standId}/plan?season=${item.season}&share=${band}&pageSize=500`,
+        );
+        expect(plan.status).toBe(200);
+        expect(plan.body.total, `${item.season} ${band}`).toBe(trees);
+        for (const tree of plan.body.items)
+          expect(['tap', 'tap-reduced', 'rest']).toContain(tree.verdict);
+      }
+    }
+    expect((await owner.agent.get(`/api/sugarbushes/${standId}/plan?share=most`)).status).toBe(400);
+  });
+
   it('keeps every season it reads current: a taphole recorded for 2026 shows in the very next answer and in each season’s stored advice', async () => {
     const seasons = await t.db('advice_state').where({ sugarbush_id: standId }).pluck('season');
     expect(seasons.map(Number).sort()).toEqual(trends.items.map((i) => i.season));
