@@ -7,7 +7,7 @@ import { RouteError } from './route-error';
 import { AppShell } from './shell/app-shell';
 import type { SectionHandle } from './shell/sections';
 
-const planned: SectionKey[] = ['round', 'overview', 'notes', 'season'];
+const planned: SectionKey[] = ['round', 'notes', 'season'];
 
 const handle = (section: SectionKey): SectionHandle => ({ section });
 
@@ -103,6 +103,20 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               handle: handle('map'),
               lazy: async () => ({
                 Component: (await import('./routes/woods-map')).WoodsMapRoute,
+              }),
+            },
+            {
+              path: paths.overview.path,
+              handle: handle('overview'),
+              lazy: async () => ({
+                Component: (await import('./routes/overview')).OverviewRoute,
+              }),
+            },
+            {
+              path: paths.complianceReport.path,
+              handle: handle('overview'),
+              lazy: async () => ({
+                Component: (await import('./routes/compliance-report')).ComplianceReportRoute,
               }),
             },
             {
