@@ -4,7 +4,7 @@ import { axisProps, lineProps, tooltipStyle } from '@/components/ui/chart-frame'
 import { paths } from '@/config/paths';
 import { formatNumber, type UnitSystem } from '@/lib/units';
 import { areaWords, basalAreaSentence, basalPerArea } from '../lib/trend-words';
-import { ChartBox, chartFont, chartMargin, seasonTick, series } from './chart-kit';
+import { ChartBox, chartFont, chartMargin, seasonTick, series, unitTick } from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 /** Basal area per acre or hectare within the boundary, season by season. */
@@ -23,8 +23,8 @@ export function BasalAreaTrend({ trends, system }: { trends: TrendsResponse; sys
       chart={
         <ChartBox>
           <LineChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" {...axisProps(chartFont)} />
-            <YAxis width={48} unit={` ${w.basal}`} {...axisProps(chartFont)} />
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
+            <YAxis width={52} tickFormatter={unitTick(w.basal)} {...axisProps(chartFont)} />
             <Tooltip
               contentStyle={tooltipStyle}
               formatter={(v) => [`${show(Number(v))} ${w.basal}`, `Per ${w.per}`]}

@@ -21,8 +21,17 @@ export const dashes = ['', '6 3', '2 3', '8 3 2 3', '1 2'];
 
 export const chartFont = 12;
 
-/** The x-axis label of a season: the planned one marked so. */
-export const seasonTick = (i: TrendSeason) => (i.planned ? `${i.season}*` : String(i.season));
+/** Legends list their series in the order they are drawn. */
+export const legendProps = { wrapperStyle: { fontSize: chartFont }, itemSorter: null };
+
+/** An axis tick with its unit, never broken across two lines. */
+export const unitTick = (unit: string) => (v: number) => `${v}\u00a0${unit}`;
+
+/** The x-axis label of a season (the section's note says which one is planned). */
+export const seasonTick = (i: TrendSeason) => String(i.season);
+
+/** Ticks of a chart in per cent of a whole. */
+export const percentTicks = [0, 25, 50, 75, 100];
 
 export function ChartBox({ children }: { children: ReactElement }) {
   return (

@@ -50,7 +50,7 @@ export function ComplianceReport({ sugarbushId }: { sugarbushId: number }) {
     compare: filters.compare,
   });
   return (
-    <article aria-labelledby="report-title" className="max-w-4xl">
+    <article aria-labelledby="report-title">
       <header className="mb-4 border-b border-rule pb-3">
         <h1 id="report-title" className="text-xl font-bold">
           Tapping against the guideline, season {r.season}

@@ -45,6 +45,7 @@ export function ComplianceTable({
       key: 'tag',
       header: 'Tag',
       sortField: 'tag',
+      className: 'whitespace-nowrap',
       cell: (i) => (
         <Link to={paths.tree.href(i.treeId)} className="font-bold underline underline-offset-4">
           {i.tag}
@@ -81,7 +82,12 @@ export function ComplianceTable({
       className: 'hidden sm:table-cell',
       cell: (i) => String(i.holesTooClose),
     },
-    { key: 'findings', header: 'Findings', cell: (i) => <Findings reading={i} /> },
+    {
+      key: 'findings',
+      header: 'Findings',
+      className: 'min-w-44',
+      cell: (i) => <Findings reading={i} />,
+    },
   ];
   if (compareLabel)
     columns.push(
@@ -94,6 +100,7 @@ export function ComplianceTable({
       {
         key: 'compare-findings',
         header: `Findings, ${compareLabel}`,
+        className: 'min-w-44',
         cell: (i) => (i.compare ? <Findings reading={i.compare} /> : '—'),
       },
     );

@@ -10,7 +10,15 @@ import {
   tapsSetPerArea,
   treesPerArea,
 } from '../lib/trend-words';
-import { ChartBox, chartFont, chartMargin, dashes, seasonTick, series } from './chart-kit';
+import {
+  ChartBox,
+  chartFont,
+  chartMargin,
+  dashes,
+  seasonTick,
+  series,
+  legendProps,
+} from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 /** Trees standing, taps set and taps advised per acre or hectare within the boundary. */
@@ -42,10 +50,10 @@ export function DensityTrend({ trends, system }: { trends: TrendsResponse; syste
       chart={
         <ChartBox>
           <LineChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" {...axisProps(chartFont)} />
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
             <YAxis width={40} {...axisProps(chartFont)} />
             <Tooltip contentStyle={tooltipStyle} formatter={(v) => show(Number(v))} />
-            <Legend wrapperStyle={{ fontSize: chartFont }} />
+            <Legend {...legendProps} />
             {lines.map((l, n) => (
               <Line
                 key={l.key}

@@ -5,7 +5,15 @@ import { paths } from '@/config/paths';
 import { colors } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 import { diebackSentence, percent } from '../lib/trend-words';
-import { ChartBox, chartFont, chartMargin, seasonTick } from './chart-kit';
+import {
+  ChartBox,
+  chartFont,
+  chartMargin,
+  legendProps,
+  percentTicks,
+  seasonTick,
+  unitTick,
+} from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 const groupColours = [colors.moss, colors.advice.rest, colors.sap, colors.alert];
@@ -36,13 +44,19 @@ export function DiebackTrend({ trends }: { trends: TrendsResponse }) {
       chart={
         <ChartBox>
           <BarChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" {...axisProps(chartFont)} />
-            <YAxis width={40} unit=" %" domain={[0, 100]} {...axisProps(chartFont)} />
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
+            <YAxis
+              width={56}
+              tickFormatter={unitTick('%')}
+              domain={[0, 100]}
+              ticks={percentTicks}
+              {...axisProps(chartFont)}
+            />
             <Tooltip
               contentStyle={tooltipStyle}
               formatter={(v) => `${formatNumber(Number(v), 1)} %`}
             />
-            <Legend wrapperStyle={{ fontSize: chartFont }} />
+            <Legend {...legendProps} />
             {diebackGroups.map((g, n) => (
               <Bar
                 key={g.key}

@@ -6,7 +6,15 @@ import { paths } from '@/config/paths';
 import { colors } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 import { percent, shareSentence } from '../lib/trend-words';
-import { ChartBox, chartFont, chartMargin, seasonTick } from './chart-kit';
+import {
+  ChartBox,
+  chartFont,
+  chartMargin,
+  legendProps,
+  percentTicks,
+  seasonTick,
+  unitTick,
+} from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 /** From little clear wood left to plenty: alert to moss, through the accent. */
@@ -37,13 +45,19 @@ export function ShareTrend({ trends }: { trends: TrendsResponse }) {
       chart={
         <ChartBox>
           <BarChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" {...axisProps(chartFont)} />
-            <YAxis width={40} unit=" %" domain={[0, 100]} {...axisProps(chartFont)} />
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
+            <YAxis
+              width={56}
+              tickFormatter={unitTick('%')}
+              domain={[0, 100]}
+              ticks={percentTicks}
+              {...axisProps(chartFont)}
+            />
             <Tooltip
               contentStyle={tooltipStyle}
               formatter={(v) => `${formatNumber(Number(v), 1)} %`}
             />
-            <Legend wrapperStyle={{ fontSize: chartFont }} />
+            <Legend {...legendProps} />
             {shareBands.map((b, n) => (
               <Bar
                 key={b.key}

@@ -3,7 +3,7 @@ import type { Spread, TrendSeason, TrendsResponse } from '@shared/schemas/trends
 import { axisProps, lineProps, tooltipStyle } from '@/components/ui/chart-frame';
 import { colors } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
-import { ChartBox, chartFont, chartMargin, seasonTick } from './chart-kit';
+import { ChartBox, chartFont, chartMargin, seasonTick, unitTick } from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 /**
@@ -52,8 +52,8 @@ export function SpreadTrend({
       chart={
         <ChartBox>
           <ComposedChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" {...axisProps(chartFont)} />
-            <YAxis width={52} unit={` ${unit}`} {...axisProps(chartFont)} />
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
+            <YAxis width={52} tickFormatter={unitTick(unit)} {...axisProps(chartFont)} />
             <Tooltip
               contentStyle={tooltipStyle}
               formatter={(v, name) => [

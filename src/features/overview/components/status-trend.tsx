@@ -5,7 +5,7 @@ import { axisProps, tooltipStyle } from '@/components/ui/chart-frame';
 import { paths } from '@/config/paths';
 import { formatNumber } from '@/lib/units';
 import { statusSentence } from '../lib/trend-words';
-import { ChartBox, chartFont, chartMargin, seasonTick, series } from './chart-kit';
+import { ChartBox, chartFont, chartMargin, seasonTick, series, legendProps } from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 /** Trees in the record each season by their status then: active, held out, dead, removed. */
@@ -19,10 +19,10 @@ export function StatusTrend({ trends }: { trends: TrendsResponse }) {
       chart={
         <ChartBox>
           <BarChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" {...axisProps(chartFont)} />
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
             <YAxis width={48} {...axisProps(chartFont)} />
             <Tooltip contentStyle={tooltipStyle} />
-            <Legend wrapperStyle={{ fontSize: chartFont }} />
+            <Legend {...legendProps} />
             {treeStatuses.map((s, n) => (
               <Bar
                 key={s}

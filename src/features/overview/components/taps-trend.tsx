@@ -4,7 +4,7 @@ import { axisProps, tooltipStyle } from '@/components/ui/chart-frame';
 import { paths } from '@/config/paths';
 import { formatNumber } from '@/lib/units';
 import { tapsSentence } from '../lib/trend-words';
-import { ChartBox, chartFont, chartMargin, seasonTick, series } from './chart-kit';
+import { ChartBox, chartFont, chartMargin, seasonTick, series, legendProps } from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 /** Tapholes recorded each season beside the taps the season's advice allowed. */
@@ -24,10 +24,10 @@ export function TapsTrend({ trends }: { trends: TrendsResponse }) {
       chart={
         <ChartBox>
           <BarChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" {...axisProps(chartFont)} />
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
             <YAxis width={48} {...axisProps(chartFont)} />
             <Tooltip contentStyle={tooltipStyle} />
-            <Legend wrapperStyle={{ fontSize: chartFont }} />
+            <Legend {...legendProps} />
             <Bar dataKey="set" name="Taps set" fill={series[0]} isAnimationActive={false} />
             <Bar
               dataKey="advised"

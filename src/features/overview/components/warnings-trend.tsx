@@ -6,7 +6,16 @@ import { paths } from '@/config/paths';
 import { formatNumber } from '@/lib/units';
 import { warningLabel } from '@/lib/warning-labels';
 import { leadingWarnings, percent, warningsSentence } from '../lib/trend-words';
-import { ChartBox, chartFont, chartMargin, dashes, seasonTick, series } from './chart-kit';
+import {
+  ChartBox,
+  chartFont,
+  chartMargin,
+  dashes,
+  seasonTick,
+  series,
+  legendProps,
+  unitTick,
+} from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 /** The share of trees whose advice carries each warning; the chart draws the four most common. */
@@ -27,13 +36,13 @@ export function WarningsTrend({ trends }: { trends: TrendsResponse }) {
       chart={
         <ChartBox>
           <LineChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" {...axisProps(chartFont)} />
-            <YAxis width={40} unit=" %" {...axisProps(chartFont)} />
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
+            <YAxis width={56} tickFormatter={unitTick('%')} {...axisProps(chartFont)} />
             <Tooltip
               contentStyle={tooltipStyle}
               formatter={(v) => `${formatNumber(Number(v), 1)} %`}
             />
-            <Legend wrapperStyle={{ fontSize: chartFont }} />
+            <Legend {...legendProps} />
             {drawn.map((c, n) => (
               <Line
                 key={c}
