@@ -152,6 +152,30 @@ describe("the demo stand's trends", () => {
     expect((await owner.agent.get(`/api/sugarbushes/${standId}/plan?share=most`)).status).toBe(400);
   });
 
+  // Crown dieback in 5 % classes (USFS Crown Condition Rating Guide, Millers et al. 1992 — P).
+  it('links each crown-dieback class to the register: the register filtered by class and round lists the trees it counts', async () => {
+    for (const item of trends.items.filter((i) => i.crownRated > 0).slice(-3)) {
+      for (const { pct, trees } of item.crownClasses) {
+        const list = await owner.agent.get(
+          `/api/sugarbushes/${standId}/trees?dieback=${pct}&diebackSeason=${item.season}&pageSize=1`,
+        );
+        expect(list.status).toBe(200);
+        expect(list.body.total, `${item.season} ${pct} %`).toBe(trees);
+      }
+    }
+    const latest = await owner.agent.get(`/api/sugarbushes/${standId}/trees?dieback=0&pageSize=1`);
+    const [{ n }] = await t
+      .db('trees')
+      .where({ sugarbush_id: standId })
+      .where('latest_crown_dieback_pct', '>=', 0)
+      .where('latest_crown_dieback_pct', '<', 5)
+      .count({ n: '*' });
+    expect(latest.body.total).toBe(Number(n));
+    expect((await owner.agent.get(`/api/sugarbushes/${standId}/trees?dieback=12`)).status).toBe(
+      400,
+    );
+  });
+
   it('keeps every season it reads current: a taphole recorded for 2026 shows in the very next answer and in each season’s stored advice', async () => {
     const seasons = await t.db('advice_state').where({ sugarbush_id: standId }).pluck('season');
     expect(seasons.map(Number).sort()).toEqual(trends.items.map((i) => i.season));
