@@ -1,21 +1,24 @@
 import { Rng, round } from './random';
 import type { MeasurementRow, TreeSpec } from './types';
 
+/** The dry summer: every tree put on a thin ring, and some crowns thinned that autumn and next. */
+export const DROUGHT_SEASON = 2020;
+
 /**
- * Stand-wide growing conditions per season (1 = an average summer): a dry 2020, a wet 2023,
- * a late frost in 2025. Sugar maple DBH growth runs about 2 in (5 cm) per decade on
- * second-growth trees and up to about 4 in (USFS Silvics of North America, Godman, Yawney &
- * Tubbs 1990 — S), so ordinary trees draw 0.25–1.0 cm a year.
+ * Stand-wide growing conditions per season (1 = an average summer): the 2020 drought, a slow
+ * 2021 after it, a wet 2023, a late frost in 2025. Sugar maple DBH growth runs about 2 in (5 cm)
+ * per decade on second-growth trees and up to about 4 in (USFS Silvics of North America, Godman,
+ * Yawney & Tubbs 1990 — S), so ordinary trees draw 0.25–1.0 cm a year.
  */
 const SEASON_GROWTH: Record<number, number> = {
   2018: 1,
-  2019: 1.08,
-  2020: 0.78,
-  2021: 1.05,
-  2022: 0.92,
-  2023: 1.14,
+  2019: 1.04,
+  [DROUGHT_SEASON]: 0.6,
+  2021: 0.9,
+  2022: 1,
+  2023: 1.1,
   2024: 1,
-  2025: 0.86,
+  2025: 0.88,
   2026: 1,
 };
 
@@ -41,15 +44,32 @@ export function roundDate(key: string, season: number, n: number): string {
 const vigour = (diebackPct: number) =>
   Math.min(1, Math.max(0.1, 1 - Math.max(0, diebackPct - 10) / 60));
 
+/** A released crown grows faster, though hardly past the 4 in a decade of a fast sugar maple. */
+function released(spec: TreeSpec, season: number): number {
+  const r = spec.release;
+  if (!r || season < r.from) return spec.rate;
+  const factor = season === r.from ? 1 + (r.factor - 1) / 2 : r.factor;
+  return Math.min(spec.rate * factor, Math.max(spec.rate, 1.05));
+}
+
+/** Crown dieback moves a class now and then; the drought thinned crowns that autumn and the next. */
+const FLICKER = [
+  [0, 84],
+  [5, 9],
+  [-5, 7],
+] as const;
+const DRY_FLICKER = [
+  [0, 76],
+  [5, 18],
+  [-5, 6],
+] as const;
+
 export function growTree(key: string, spec: TreeSpec, lastSeason: number): GrowthHistory {
   const rng = Rng.for(key, 'growth', spec.n);
   const dieback: Record<number, number> = {};
   for (let s = spec.firstSeason; s <= lastSeason; s++) {
-    const flicker = rng.weighted([
-      [0, 84],
-      [5, 9],
-      [-5, 7],
-    ] as const);
+    const dry = s === DROUGHT_SEASON || s === DROUGHT_SEASON + 1;
+    const flicker = rng.weighted(dry ? DRY_FLICKER : FLICKER);
     dieback[s] = spec.diebackBySeason[s] ?? Math.max(0, spec.diebackBase + flicker);
   }
 
@@ -62,7 +82,7 @@ export function growTree(key: string, spec: TreeSpec, lastSeason: number): Growt
     springDbh[s] = prev;
     const alive = spec.diedIn === null || s < spec.diedIn;
     const gain = alive
-      ? spec.rate * (SEASON_GROWTH[s] ?? 1) * rng.range(0.85, 1.15) * vigour(dieback[s])
+      ? released(spec, s) * (SEASON_GROWTH[s] ?? 1) * rng.range(0.85, 1.15) * vigour(dieback[s])
       : 0;
     autumnDbh[s] = Math.min(spec.maxDbh, prev + gain);
   }

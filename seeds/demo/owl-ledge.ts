@@ -3,14 +3,15 @@ import { insideRing, nearestOnRing, polygonGeoJson, type XY } from './geo';
 import { DEMO_PROBLEM_TAGS, applyProblem, problemOf } from './problems';
 import type { Rng } from './random';
 import { ordinaryStand, type StandLayout } from './stand';
+import { thinStand } from './thinning';
 import type { TreeSpec } from './types';
 
 /** A hollow in the south-west corner where a brook runs: wetter ground, more red maple. */
 const HOLLOW: XY = [-230, -140];
 
 function owlLedgeSpecies(xy: XY, rng: Rng): Species {
-  const wet = Math.exp(-((xy[0] - HOLLOW[0]) ** 2 + (xy[1] - HOLLOW[1]) ** 2) / (2 * 110 ** 2));
-  const red = 0.085 + 0.42 * wet;
+  const wet = Math.exp(-((xy[0] - HOLLOW[0]) ** 2 + (xy[1] - HOLLOW[1]) ** 2) / (2 * 80 ** 2));
+  const red = 0.085 + 0.36 * wet;
   const x = rng.float();
   if (x < red) return 'red-maple';
   if (x < red + 0.006) return 'black-maple';
@@ -25,36 +26,40 @@ export const OWL_LEDGE: StandLayout = {
   tagDigits: 4,
   // An invented spot in hill country; nothing here describes a real property.
   origin: { lat: 44.3127, lng: -72.6418 },
+  // About 17.5 acres (7.1 ha) down the hill's south-west shoulder, from the ledge at the top to
+  // the hollow; the sugarhouse road runs along the north-west side. Some 1,100 maples on it make
+  // the basal area and the taps per acre of a managed sugarbush.
   ring: [
-    [-330, -170],
-    [-180, -235],
-    [-20, -205],
-    [140, -250],
-    [300, -190],
-    [350, -60],
-    [320, 60],
-    [365, 170],
-    [230, 245],
-    [60, 215],
-    [-90, 262],
-    [-250, 190],
-    [-345, 60],
+    [-290, -131],
+    [-247, -179],
+    [-165, -160],
+    [-79, -117],
+    [17, -69],
+    [113, -45],
+    [180, -11],
+    [195, 56],
+    [142, 104],
+    [56, 94],
+    [-21, 70],
+    [-108, 37],
+    [-194, 8],
+    [-266, -40],
   ],
   gaps: [
-    { centre: [60, 20], radius: 45 }, // the ledge itself: bare rock and hemlock
-    { centre: [-250, -120], radius: 25 }, // a seep at the head of the brook
+    { centre: [60, 20], radius: 35 }, // the ledge itself: bare rock and hemlock
+    { centre: [-250, -120], radius: 20 }, // a seep at the head of the brook
   ],
   treeCount: 1187,
-  clusterCount: 38,
-  clusterSd: 30,
-  clusteredShare: 0.72,
+  clusterCount: 30,
+  clusterSd: 22,
+  clusteredShare: 0.55,
   minSpacingM: 3.5,
-  bandM: 40,
+  bandM: 25,
   firstSeason: 2018,
   lastSeason: 2026,
   speciesAt: owlLedgeSpecies,
-  // The north-west corner by the sugarhouse road still hangs buckets.
-  collectionAt: ([x, y]) => (x < -120 && y > 90 ? 'bucket' : 'vacuum'),
+  // The corner by the sugarhouse at the road's end still hangs buckets.
+  collectionAt: ([x, y]) => (x < -190 && y > -60 ? 'bucket' : 'vacuum'),
 };
 
 export const OWL_LEDGE_BOUNDARY = polygonGeoJson(OWL_LEDGE.origin, OWL_LEDGE.ring);
@@ -86,13 +91,14 @@ function pushOutside(xy: XY, n: number): XY {
 
 /** Every Owl Ledge tree with the trouble it carries. */
 export function owlLedgeSpecs(): TreeSpec[] {
-  return ordinaryStand(OWL_LEDGE).map((base) => {
+  const troubled = ordinaryStand(OWL_LEDGE).map((base) => {
     const category = problemOf(base.tag);
-    let spec = category ? applyProblem(base, category, OWL_LEDGE.lastSeason) : base;
-    if (category === 'outside-boundary' && spec.xy)
-      spec = { ...spec, xy: pushOutside(spec.xy, spec.n) };
-    if (unmapped(spec)) spec = { ...spec, xy: null };
-    return spec;
+    return category ? applyProblem(base, category, OWL_LEDGE.lastSeason) : base;
+  });
+  return thinStand(OWL_LEDGE.key, troubled).map((spec) => {
+    if (spec.category === 'outside-boundary' && spec.xy)
+      return { ...spec, xy: pushOutside(spec.xy, spec.n) };
+    return unmapped(spec) ? { ...spec, xy: null } : spec;
   });
 }
 

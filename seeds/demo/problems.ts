@@ -123,6 +123,7 @@ export function applyProblem(
       t.diebackBase = 5;
       t.dbhStart = rng.range(45, 70);
       t.status = 'removed';
+      t.removedOn = '2025-01-20 11:45:00';
       t.measuredThrough = 2024;
       t.tappedThrough = 2024;
       t.diebackBySeason = ramp(2022, 10, 2024, 30);

@@ -1,7 +1,38 @@
 import type { NoteCategory } from '../../shared/schemas/enums';
+import { DROUGHT_SEASON } from './growth';
 import { holes, note, type NoteDraft } from './note-helpers';
 import { DEMO_PROBLEM_TAGS } from './problems';
+import { THINNING } from './thinning';
 import type { TreePlan } from './types';
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return (s[Math.floor((s.length - 1) / 2)] + s[Math.ceil((s.length - 1) / 2)]) / 2;
+}
+
+/** What the thinning did: trees cut, and the median yearly DBH growth before and after it. */
+function thinningFigures(plans: TreePlan[]) {
+  const cut = plans.filter((p) => p.spec.removedOn?.startsWith(`${THINNING.firstSeason}-`));
+  const residual = plans.filter((p) => p.spec.status === 'active' && p.measurements.length === 9);
+  const dbh = (p: TreePlan, season: number) =>
+    p.measurements.find((m) => m.season === season)!.dbhCm;
+  const end = Math.max(...residual.map((p) => p.measurements[p.measurements.length - 1].season));
+  const before = median(
+    residual.map(
+      (p) =>
+        (dbh(p, DROUGHT_SEASON - 1) -
+          dbh(p, DROUGHT_SEASON - 2) +
+          dbh(p, DROUGHT_SEASON + 1) -
+          dbh(p, DROUGHT_SEASON)) /
+        2,
+    ),
+  );
+  const after = median(
+    residual.map((p) => (dbh(p, end) - dbh(p, THINNING.lastRound)) / (end - THINNING.lastRound)),
+  );
+  const drought = median(residual.map((p) => dbh(p, DROUGHT_SEASON) - dbh(p, DROUGHT_SEASON - 1)));
+  return { cut: cut.length, before, after, drought };
+}
 
 /** The consultant's notes on the stand as a whole (no tree). */
 export function standNotes(plans: TreePlan[]): Omit<NoteDraft, 'createdAt'>[] {
@@ -9,6 +40,7 @@ export function standNotes(plans: TreePlan[]): Omit<NoteDraft, 'createdAt'>[] {
   const hits = lastHoles.filter((t) => t.stainHit).length;
   const unmapped = plans.filter((p) => p.lat === null).length;
   const lateral = DEMO_PROBLEM_TAGS['depleted-zone'];
+  const thinning = thinningFigures(plans);
   const stand = (category: NoteCategory, body: string, followUpOn: string | null = null) => ({
     tag: null,
     ...note(category, body, followUpOn),
@@ -18,6 +50,14 @@ export function standNotes(plans: TreePlan[]): Omit<NoteDraft, 'createdAt'>[] {
       'finding',
       `Autumn 2026 walk-through: most crowns rate 0–10 % dieback and growth is steady. The ` +
         `exceptions are listed tree by tree.`,
+    ),
+    stand(
+      'finding',
+      `Since the thinning of January ${THINNING.firstSeason} (${thinning.cut} trees cut, mostly ` +
+        `those crowding a better sugar maple) the trees left standing have added ` +
+        `${thinning.after.toFixed(2)} cm of diameter a year, against ${thinning.before.toFixed(2)} ` +
+        `cm in the ordinary summers before it; the ${DROUGHT_SEASON} drought summer added only ` +
+        `${thinning.drought.toFixed(1)} cm.`,
     ),
     stand(
       'finding',

@@ -93,8 +93,8 @@ export const tagFor = (layout: StandLayout, n: number) =>
 /** A first DBH (cm) for an ordinary tree: mostly 25–60 cm, some small, a few large. */
 function startingDbh(rng: Rng): number {
   const kind = rng.weighted([
-    ['small', 17],
-    ['main', 73],
+    ['small', 12],
+    ['main', 78],
     ['large', 8],
     ['veteran', 2],
   ] as const);
@@ -138,6 +138,8 @@ export function ordinaryTree(layout: StandLayout, n: number, xy: XY): TreeSpec {
     wideSpoutFrom: null,
     measureOffset: null,
     diedIn: null,
+    removedOn: null,
+    release: null,
     tapsOverride: null,
     sloppyFrom: null,
     measureError: null,

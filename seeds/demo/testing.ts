@@ -29,6 +29,7 @@ export interface TreeRow {
   lat: number | null;
   lng: number | null;
   status: string;
+  updated_at: string;
 }
 export interface MeasurementDbRow {
   tree_id: number;
@@ -36,6 +37,7 @@ export interface MeasurementDbRow {
   measured_on: string;
   dbh_cm: number;
   crown_dieback_pct: number;
+  confirmed_outlier: number | boolean;
 }
 export interface TapholeDbRow {
   tree_id: number;

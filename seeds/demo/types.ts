@@ -55,6 +55,13 @@ export interface TreeSpec {
   noTapping: boolean;
   /** The tree stops growing from this season on (it died). */
   diedIn: number | null;
+  /** When the register was set to `removed` (the tree was felled); null while it stands. */
+  removedOn: string | null;
+  /**
+   * Its neighbours were cut: from season `from` on it grows `factor` times as fast (half the gain
+   * in the first summer, while the crown fills the gap).
+   */
+  release: { from: number; factor: number } | null;
   /** From `from` on, every season carries between min and max holes whatever the table says. */
   tapsOverride: { from: number; min: number; max: number } | null;
   /** From this season on, the tapper used the old 7/16 in bit on this tree. */

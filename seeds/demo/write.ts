@@ -13,7 +13,7 @@ function statusChange(p: TreePlan): string | null {
     case 'dead':
       return stamp(p.measurements.find((m) => m.crownDiebackPct === 100)!.measuredOn, '17:20:00');
     case 'removed':
-      return '2025-01-20 11:45:00';
+      return p.spec.removedOn;
     case 'held-out':
       return '2023-12-05 09:10:00';
     default:

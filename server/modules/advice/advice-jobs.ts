@@ -7,9 +7,10 @@ import type { Logger } from '../../lib/logger';
 import type { AdviceStatus } from '../../../shared/schemas/advice-status';
 import type { PlanTotals } from '../../../shared/rules/index';
 import { adviceRepository, type PlanFilter } from './advice.repository';
+import type { GuidelinePreview } from '../../../shared/schemas/guideline-preview';
 import type { EvaluatedTree, GuidelineChoice } from '../compliance/compliance-task';
 import type { TrendResult } from '../trends/stand-trends';
-import type { AdviceTask, PlannedTree } from './advice-worker-tasks';
+import type { AdviceTask, PreviewGuideline } from './advice-worker-tasks';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
 const CHUNK = 500;
@@ -34,8 +35,13 @@ export interface AdviceJobs {
     standVersion: number,
     filter: PlanFilter & { sort?: string },
   ): Promise<number[]>;
-  /** Every tree's taps and verdict under another guideline, computed in a worker, not stored. */
-  planWith(sugarbushId: number, season: number, guideline: GuidelineChoice): Promise<PlannedTree[]>;
+  /** What another guideline would change against the stored plan, worked out in a worker. */
+  preview(
+    sugarbushId: number,
+    season: number,
+    standVersion: number,
+    guideline: PreviewGuideline,
+  ): Promise<GuidelinePreview>;
   /** Every tree tapped in a season held against each guideline, in a worker, not stored. */
   compliance(
     sugarbushId: number,
@@ -177,8 +183,14 @@ export function createAdviceJobs(opts: {
       return task<number[]>({ kind: 'order', sugarbushId, season, standVersion, filter });
     },
 
-    planWith(sugarbushId, season, guideline) {
-      return task<PlannedTree[]>({ kind: 'plan-with', sugarbushId, season, guideline });
+    preview(sugarbushId, season, standVersion, guideline) {
+      return task<GuidelinePreview>({
+        kind: 'preview',
+        sugarbushId,
+        season,
+        standVersion,
+        guideline,
+      });
     },
 
     compliance(sugarbushId, season, guidelines) {

@@ -2,11 +2,13 @@ import type { Knex } from 'knex';
 import type { DatabaseTarget } from '../../config';
 import { openDb } from '../../db';
 import { adviseTree, type PlanTotals } from '../../../shared/rules/index';
+import type { GuidelinePreview } from '../../../shared/schemas/guideline-preview';
 import {
   evaluateCompliance,
   type EvaluatedTree,
   type GuidelineChoice,
 } from '../compliance/compliance-task';
+import { diffPlans } from '../plans/plan-diff';
 import { loadStandTrees } from '../plans/plans.repository';
 import type { TrendResult } from '../trends/stand-trends';
 import { computeTrends } from '../trends/trends-task';
@@ -32,8 +34,8 @@ export type AdviceTask =
   | (OnStand & { kind: 'totals'; standVersion: number })
   /** The ids of the current rows matching a filter, in a sort's order. */
   | (OnStand & { kind: 'order'; standVersion: number; filter: PlanFilter & { sort?: string } })
-  /** Every tree under another guideline, answered and not stored (a preview). */
-  | (OnStand & { kind: 'plan-with'; guideline: GuidelineChoice })
+  /** The stored plan against every tree under another guideline, which is not stored. */
+  | (OnStand & { kind: 'preview'; standVersion: number; guideline: PreviewGuideline })
   /** Every tree tapped in the season, held against each guideline (not stored). */
   | (OnStand & { kind: 'compliance'; guidelines: GuidelineChoice[] })
   /** Seasons with a measurement or a taphole of the stand on record. */
@@ -45,13 +47,12 @@ export type AdviceTask =
       upcoming: number;
     });
 
-/** One tree's answer under a guideline that is not (yet) the stand's: what a preview compares. */
-export interface PlannedTree {
-  treeId: number;
-  tag: string;
-  taps: number;
-  verdict: string;
-  dbhCm: number | null;
+/** A guideline to preview: a profile key (or `custom` with its JSON), and both sides' names. */
+export interface PreviewGuideline {
+  profile: string;
+  customJson: string | null;
+  from: { profile: string; label: string };
+  label: string;
 }
 
 const connections = new Map<string, Knex>();
@@ -71,7 +72,7 @@ function dbFor(target: DatabaseTarget): Knex {
 
 export async function runAdviceTask(
   task: AdviceTask,
-): Promise<number[] | number | PlannedTree[] | PlanTotals | EvaluatedTree[] | TrendResult> {
+): Promise<number[] | number | PlanTotals | GuidelinePreview | EvaluatedTree[] | TrendResult> {
   const db = dbFor(task.database);
   if (task.kind === 'recorded-seasons')
     return trendsRepository(db).recordedSeasons(task.sugarbushId);
@@ -92,11 +93,27 @@ export async function runAdviceTask(
     );
   if (task.kind === 'advise')
     return adviseAndStore(db, task.sugarbushId, task.season, task.treeIds);
+  const { guideline } = task;
   const { sunnyAzimuthDeg } = await standGuideline(db, task.sugarbushId);
-  const profile = profileOf(task.guideline.profile, task.guideline.customJson);
-  const trees = await loadStandTrees(db, task.sugarbushId);
-  return trees.map((tree) => {
+  const profile = profileOf(guideline.profile, guideline.customJson);
+  const [stored, trees] = await Promise.all([
+    adviceRepository(db).all(task.sugarbushId, task.season, task.standVersion),
+    loadStandTrees(db, task.sugarbushId),
+  ]);
+  const after = trees.map((tree) => {
     const a = adviseTree(tree, { season: task.season, profile, sunnyAzimuthDeg });
     return { treeId: tree.id, tag: tree.tag, taps: a.taps, verdict: a.verdict, dbhCm: a.dbhCm };
   });
+  const before = stored.map((r) => ({
+    treeId: Number(r.id),
+    tag: r.tag,
+    taps: Number(r.taps),
+    verdict: r.verdict,
+    dbhCm: r.dbh_cm,
+  }));
+  return diffPlans(
+    { ...guideline.from, items: before },
+    { profile: profile.key, label: guideline.label, items: after },
+    task.season,
+  );
 }

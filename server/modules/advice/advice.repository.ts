@@ -229,19 +229,17 @@ export function adviceRepository(db: Knex) {
       };
     },
 
-    /** Every current row of the stand, in tag order: what the map and the stand figures draw. */
+    /** Every current row's taps and verdict, in tag order: what a guideline preview compares. */
     async all(sugarbushId: number, season: number, standVersion: number) {
       const rows = await current(sugarbushId, season, standVersion)
         .orderBy('t.tag')
-        .select('t.id', 't.tag', 'a.verdict', 'a.taps', 'a.dbh_cm', 'a.warning_mask', 'a.payload');
+        .select('t.id', 't.tag', 'a.verdict', 'a.taps', 'a.dbh_cm');
       return rows as {
         id: number;
         tag: string;
         verdict: string;
         taps: number;
         dbh_cm: number | null;
-        warning_mask: number;
-        payload: string;
       }[];
     },
   };

@@ -13,7 +13,6 @@ import type {
   GuidelinePreviewInput,
 } from '../../../shared/schemas/guideline-preview';
 import { profileColumns } from '../sugarbushes/profile-choice';
-import { diffPlans } from './plan-diff';
 import { keptByStamp } from '../../lib/kept-by-stamp';
 import { adviceRepository } from '../advice/advice.repository';
 import { profileOf } from '../advice/stand-guideline';
@@ -172,32 +171,12 @@ export function plansService(ctx: AppContext) {
       );
       const current = profileOf(row.profile, row.custom_profile);
       const version = await ctx.advice.ensure(sugarbushId, season);
-      const [before, after] = await Promise.all([
-        store.all(sugarbushId, season, version),
-        ctx.advice.planWith(sugarbushId, season, {
-          profile: input.profile,
-          customJson: (columns.custom_profile as string | undefined) ?? row.custom_profile,
-        }),
-      ]);
-      return diffPlans(
-        {
-          label: current.label,
-          profile: current.key,
-          items: before.map((r) => ({
-            treeId: r.id,
-            tag: r.tag,
-            taps: r.taps,
-            verdict: r.verdict,
-            dbhCm: r.dbh_cm,
-          })),
-        },
-        { label: target.label, profile: target.key, items: after },
-        season,
-      );
-    },
-
-    async planForStand(sugarbushId: number, q: PlanQuery): Promise<StandPlanResponse> {
-      return JSON.parse(await this.planForStandJson(sugarbushId, q)) as StandPlanResponse;
+      return ctx.advice.preview(sugarbushId, season, version, {
+        profile: input.profile,
+        customJson: (columns.custom_profile as string | undefined) ?? row.custom_profile,
+        from: { profile: current.key, label: current.label },
+        label: target.label,
+      });
     },
 
     /**
