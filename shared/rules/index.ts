@@ -119,7 +119,8 @@ export {
   type Advice,
   type AdviseOptions,
 } from './advise-tree';
-export type { AdvisorTree, AdvisorMeasurement, AdvisorTaphole } from './tree-record';
+export { statusInSeason } from './tree-record';
+export type { AdvisorTree, AdvisorMeasurement, AdvisorTaphole, StatusChange } from './tree-record';
 export {
   planStand,
   type StandTree,

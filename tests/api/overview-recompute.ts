@@ -156,11 +156,15 @@ export function recomputeSeason(stand: RawStand, season: number) {
     const status = statusAt(t, season);
     byStatus[status]++;
     const living = status === 'active' || status === 'held-out';
-    const advice = adviseTree(t, {
-      season,
-      profile: stand.profile,
-      sunnyAzimuthDeg: stand.sunnyAzimuthDeg,
-    });
+    const history = t.statuses.map(([on, s, created]) => ({ on, status: s, created }));
+    const advice = adviseTree(
+      { ...t, statusHistory: history },
+      {
+        season,
+        profile: stand.profile,
+        sunnyAzimuthDeg: stand.sunnyAzimuthDeg,
+      },
+    );
     for (const code of new Set(advice.warnings.map((w) => w.code)))
       warnings[code] = (warnings[code] ?? 0) + 1;
     if (living && advice.dbhCm !== null) dbhs.push(advice.dbhCm);

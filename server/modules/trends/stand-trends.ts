@@ -6,11 +6,13 @@ import {
   basalAreaCm2,
   screenReadings,
   seasonOf,
+  statusInSeason,
   warningCodes,
   type AdvisorMeasurement,
+  type StatusChange,
   type WarningCode,
 } from '../../../shared/rules/index';
-import { treeStatuses, type TreeStatus } from '../../../shared/schemas/enums';
+import { treeStatuses } from '../../../shared/schemas/enums';
 import {
   shareBandOf,
   shareBands,
@@ -18,12 +20,13 @@ import {
   type ShareBandKey,
 } from '../../../shared/schemas/share-bands';
 import { diebackClassOf, type Spread, type TrendSeason } from '../../../shared/schemas/trends';
-import type { StatusEvent, TrendAdvice, TrendTreeRow } from './trends.repository';
+import type { TrendAdvice, TrendTreeRow } from './trends.repository';
 
 /** One tree with what the trends read of its record. */
 export interface TrendTree extends TrendTreeRow {
   measurements: readonly AdvisorMeasurement[];
   tapholes: readonly { season: number }[];
+  statusHistory?: readonly StatusChange[];
 }
 
 export interface TrendInput {
@@ -31,7 +34,6 @@ export interface TrendInput {
   /** Each season with its stored advice, oldest first. */
   seasons: { season: number; advice: Map<number, TrendAdvice> }[];
   trees: readonly TrendTree[];
-  statusEvents: readonly StatusEvent[];
   boundary: Boundary | null;
 }
 
@@ -61,23 +63,9 @@ export function spread(values: number[]): Spread | null {
   };
 }
 
-/**
- * The status at the end of a season by the audit trail: the last one given by then; before the
- * first entry, the status it was created with, or active where the first entry is a change.
- * A tree the trail never names has always had its status.
- */
-function statusAt(events: readonly StatusEvent[], current: TreeStatus, season: number) {
-  if (events.length === 0) return current;
-  const end = `${season}-12-31`;
-  let status: TreeStatus | null = null;
-  for (const e of events) if (e.on <= end) status = e.status;
-  return status ?? (events[0].created ? events[0].status : 'active');
-}
-
 interface TreeFacts {
   tree: TrendTree;
   firstSeason: number;
-  events: StatusEvent[];
   inside: boolean;
   /** The latest believable DBH read in each season. */
   readBySeason: Map<number, number>;
@@ -86,7 +74,7 @@ interface TreeFacts {
   holesBySeason: Map<number, number>;
 }
 
-function factsOf(tree: TrendTree, events: StatusEvent[], boundary: Boundary | null): TreeFacts {
+function factsOf(tree: TrendTree, boundary: Boundary | null): TreeFacts {
   const seasons = [
     ...tree.measurements.map((m) => seasonOf(m.measuredOn)),
     ...tree.tapholes.map((h) => h.season),
@@ -105,7 +93,6 @@ function factsOf(tree: TrendTree, events: StatusEvent[], boundary: Boundary | nu
   return {
     tree,
     firstSeason: seasons.length > 0 ? Math.min(...seasons) : Number(tree.createdOn.slice(0, 4)),
-    events,
     inside: mapped && !isOutside(boundary, tree.lng, tree.lat),
     readBySeason,
     crownBySeason,
@@ -147,7 +134,8 @@ function seasonFigures(
   for (const f of facts) {
     if (f.firstSeason > season) continue;
     trees++;
-    const status = statusAt(f.events, f.tree.status, season);
+    // The status the tree had then, by the audit trail: as the season's advice read it.
+    const status = statusInSeason(f.tree, season) ?? f.tree.status;
     byStatus[status]++;
     const living = status === 'active' || status === 'held-out';
     const a = advice.get(f.tree.id);
@@ -235,10 +223,7 @@ function seasonFigures(
 /** A stand's figures season by season, from its stored advice and its record. */
 export function standTrends(input: TrendInput): TrendResult {
   const areaM2 = input.boundary ? boundaryAreaM2(input.boundary) : null;
-  const eventsByTree = new Map<number, StatusEvent[]>();
-  for (const e of input.statusEvents)
-    eventsByTree.set(e.treeId, [...(eventsByTree.get(e.treeId) ?? []), e]);
-  const facts = input.trees.map((t) => factsOf(t, eventsByTree.get(t.id) ?? [], input.boundary));
+  const facts = input.trees.map((t) => factsOf(t, input.boundary));
   const incomplete: number[] = [];
   const items = input.seasons.map(({ season, advice }) => {
     const { item, missing } = seasonFigures(

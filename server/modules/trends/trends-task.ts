@@ -17,7 +17,6 @@ export async function computeTrends(
   const repo = trendsRepository(db);
   const rows = await repo.trees(sugarbushId);
   const records = new Map((await loadStandTrees(db, sugarbushId)).map((t) => [t.id, t]));
-  const statusEvents = await repo.statusEvents(sugarbushId);
   const boundary = await mapRepository(db).boundary(sugarbushId);
   const advised = [];
   for (const s of seasons)
@@ -29,6 +28,7 @@ export async function computeTrends(
     ...row,
     measurements: records.get(row.id)?.measurements ?? [],
     tapholes: records.get(row.id)?.tapholes ?? [],
+    statusHistory: records.get(row.id)?.statusHistory,
   }));
-  return standTrends({ upcoming, seasons: advised, trees, statusEvents, boundary });
+  return standTrends({ upcoming, seasons: advised, trees, boundary });
 }

@@ -1,6 +1,5 @@
 import type { Knex } from 'knex';
 import type { TreeStatus } from '../../../shared/schemas/enums';
-import { treeStatuses } from '../../../shared/schemas/enums';
 
 /** A tree of the stand as the trends read it: where it stands and when it was added. */
 export interface TrendTreeRow {
@@ -11,15 +10,6 @@ export interface TrendTreeRow {
   createdOn: string;
 }
 
-/** A status a tree was given, by the audit trail: at creation or by a later edit. */
-export interface StatusEvent {
-  treeId: number;
-  /** YYYY-MM-DD of the entry (UTC). */
-  on: string;
-  status: TreeStatus;
-  created: boolean;
-}
-
 /** The stored columns of one tree's advice for a season (never its JSON). */
 export interface TrendAdvice {
   verdict: string;
@@ -28,9 +18,6 @@ export interface TrendAdvice {
   share: number;
   warningMask: number;
 }
-
-const isStatus = (s: unknown): s is TreeStatus =>
-  typeof s === 'string' && (treeStatuses as readonly string[]).includes(s);
 
 export function trendsRepository(db: Knex) {
   const ofStand = (table: string, alias: string, sugarbushId: number) =>
@@ -61,38 +48,6 @@ export function trendsRepository(db: Knex) {
         status: r.status,
         createdOn: String(r.created_at).slice(0, 10),
       }));
-    },
-
-    /** Every status the trail gave the stand's trees, oldest first. */
-    async statusEvents(sugarbushId: number): Promise<StatusEvent[]> {
-      const rows: { entity_id: number; action: string; detail: string; created_at: string }[] =
-        await db('audit_events')
-          .where({ sugarbush_id: sugarbushId, entity: 'tree' })
-          .whereIn('action', ['create', 'update'])
-          .whereNotNull('detail')
-          .whereNotNull('entity_id')
-          .orderBy([
-            { column: 'created_at', order: 'asc' },
-            { column: 'id', order: 'asc' },
-          ])
-          .select('entity_id', 'action', 'detail', 'created_at');
-      const events: StatusEvent[] = [];
-      for (const r of rows) {
-        let status: unknown;
-        try {
-          status = (JSON.parse(r.detail) as { status?: unknown } | null)?.status;
-        } catch {
-          continue; // a detail that is not JSON names no status
-        }
-        if (isStatus(status))
-          events.push({
-            treeId: Number(r.entity_id),
-            on: String(r.created_at).slice(0, 10),
-            status,
-            created: r.action === 'create',
-          });
-      }
-      return events;
     },
 
     /** The season's stored advice made from each tree's current record and this guideline version. */
