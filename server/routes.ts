@@ -2,7 +2,9 @@ import { Router } from 'express';
 import type { AppContext } from './context';
 import { requireAuth } from './middleware/auth';
 import { adviceRoutes } from './modules/advice/advice.routes';
+import { auditRoutes } from './modules/audit/audit.routes';
 import { basemapsRoutes } from './modules/basemaps/basemaps.routes';
+import { complianceRoutes } from './modules/compliance/compliance.routes';
 import { invitationsRoutes } from './modules/invitations/invitations.routes';
 import { membersRoutes } from './modules/members/members.routes';
 import { mapRoutes } from './modules/map/map.routes';
@@ -13,6 +15,7 @@ import { plansRoutes } from './modules/plans/plans.routes';
 import { sugarbushesRoutes } from './modules/sugarbushes/sugarbushes.routes';
 import { tapholesRoutes } from './modules/tapholes/tapholes.routes';
 import { treesRoutes } from './modules/trees/trees.routes';
+import { trendsRoutes } from './modules/trends/trends.routes';
 
 /** Every API route behind sign-in (the auth routes are mounted before this). */
 export function apiRoutes(ctx: AppContext) {
@@ -27,6 +30,9 @@ export function apiRoutes(ctx: AppContext) {
   router.use(plansRoutes(ctx));
   router.use(adviceRoutes(ctx));
   router.use(mapRoutes(ctx));
+  router.use(trendsRoutes(ctx));
+  router.use(complianceRoutes(ctx));
+  router.use(auditRoutes(ctx));
   router.use(basemapsRoutes(ctx));
   router.use(membersRoutes(ctx));
   router.use(invitationsRoutes(ctx));

@@ -24,6 +24,7 @@ import {
   allowedInLastSeason,
   dbhBefore,
   readRecord,
+  statusInSeason,
   type AdvisorTaphole,
   type AdvisorTree,
 } from './tree-record';
@@ -149,7 +150,8 @@ export function adviseTree(tree: AdvisorTree, options: AdviseOptions): Advice {
     drillingNotes: notes,
     frozen,
   };
-  if (tree.status && tree.status !== 'active') {
+  const status = statusInSeason(tree, season);
+  if (status && status !== 'active') {
     advice.verdict = 'retired';
     reasons.push('The tree is not in production.');
     return advice;

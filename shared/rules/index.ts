@@ -119,7 +119,8 @@ export {
   type Advice,
   type AdviseOptions,
 } from './advise-tree';
-export type { AdvisorTree, AdvisorMeasurement, AdvisorTaphole } from './tree-record';
+export { statusInSeason } from './tree-record';
+export type { AdvisorTree, AdvisorMeasurement, AdvisorTaphole, StatusChange } from './tree-record';
 export {
   planStand,
   type StandTree,
@@ -127,6 +128,12 @@ export {
   type PlanTotals,
   type StandPlan,
 } from './plan-stand';
+export {
+  seasonCompliance,
+  complianceFindings,
+  type ComplianceFinding,
+  type SeasonCompliance,
+} from './season-compliance';
 export { verdicts, verdictByKey, type VerdictKey, type Verdict } from './verdicts';
 export { warningCodes, bitWords, type WarningCode, type AdvisorWarning } from './warnings';
 export { sources } from './sources';

@@ -22,9 +22,21 @@ export interface AdvisorTaphole {
   collection: Collection;
 }
 
+/** A status the tree was given, and when: at its creation, or by a later change. */
+export interface StatusChange {
+  /** YYYY-MM-DD. */
+  on: string;
+  status: TreeStatus;
+  /** The status the tree was created with (before it, the tree was not on record). */
+  created?: boolean;
+}
+
 export interface AdvisorTree {
   species?: Species;
+  /** The register's status now. */
   status?: TreeStatus;
+  /** When the status was given, oldest first; without it, `status` has always held. */
+  statusHistory?: readonly StatusChange[];
   /** Injury or disease noted by a forester: treated like heavy crown dieback. */
   stressed?: boolean;
   measurements: readonly AdvisorMeasurement[];
@@ -82,6 +94,24 @@ export function readRecord(tree: AdvisorTree, season: number, collection?: Colle
     lastSeasonHoles,
     collection: collection ?? lastHole?.collection ?? 'vacuum',
   };
+}
+
+/**
+ * The tree's status at the end of a season: the last one given by then. Before the first change
+ * on record it is the status the tree was created with, or active where the first entry is a
+ * change; a tree with no history has always had its status. The status is read like the rest of
+ * the record: a tree removed in a later season was in production in this one.
+ */
+export function statusInSeason(
+  tree: Pick<AdvisorTree, 'status' | 'statusHistory'>,
+  season: number,
+): TreeStatus | undefined {
+  const history = tree.statusHistory;
+  if (!history || history.length === 0) return tree.status;
+  const end = `${season}-12-31`;
+  let status: TreeStatus | null = null;
+  for (const change of history) if (change.on <= end) status = change.status;
+  return status ?? (history[0].created ? history[0].status : 'active');
 }
 
 /** The latest believable DBH measured before a season began (before 1 January of it). */

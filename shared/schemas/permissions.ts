@@ -16,6 +16,8 @@ export const permissions = {
   'choose-guideline': ['owner'],
   /** The team: roles, removal, invitations. */
   'manage-members': ['owner'],
+  /** Who recorded, corrected or changed what in the stand, and when. */
+  'read-audit': ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;
@@ -30,6 +32,7 @@ export const permissionLabels: Record<Permission, string> = {
   'manage-stand': 'Rename the stand and set its sunny side',
   'choose-guideline': 'Choose the tapping guideline',
   'manage-members': 'Invite people, change roles, remove members',
+  'read-audit': 'Read the record of who changed what',
 };
 
 export function can(role: Role | null | undefined, action: Permission): boolean {

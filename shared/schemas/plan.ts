@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { Advice, GuidelineRule, PlanTotals, ProfileSpacing } from '../rules/index';
 import { listQuerySchema } from './list-query';
 import type { Hazard } from './note';
+import { shareBandKeys } from './share-bands';
 
 /**
  * The season a plan is for: tapping runs late winter, so from June on the next season is the one
@@ -12,7 +13,9 @@ export function upcomingSeason(today: Date = new Date()): number {
   return today.getUTCMonth() >= 5 ? year + 1 : year;
 }
 
-const season = z.coerce.number().int().min(1990).max(2200);
+/** `?season=` as every route takes it: a year from 1990. */
+export const seasonSchema = z.coerce.number().int().min(1990).max(2200);
+const season = seasonSchema;
 
 export const adviceQuerySchema = z.object({ season: season.optional() });
 
@@ -23,6 +26,8 @@ export const planQuerySchema = listQuerySchema.extend({
     .optional(),
   verdict: z.string().max(20).optional(),
   warning: z.string().max(30).optional(),
+  /** Trees big enough to tap whose conductive share lies in one band (`shareBands`). */
+  share: z.enum(shareBandKeys).optional(),
 });
 export type PlanQuery = z.output<typeof planQuerySchema>;
 

@@ -7,7 +7,7 @@ import { RouteError } from './route-error';
 import { AppShell } from './shell/app-shell';
 import type { SectionHandle } from './shell/sections';
 
-const planned: SectionKey[] = ['round', 'overview', 'season'];
+const planned: SectionKey[] = ['round', 'season'];
 
 const handle = (section: SectionKey): SectionHandle => ({ section });
 
@@ -109,6 +109,20 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               path: paths.notes.path,
               handle: handle('notes'),
               lazy: async () => ({ Component: (await import('./routes/notes')).NotesRoute }),
+            },
+            {
+              path: paths.overview.path,
+              handle: handle('overview'),
+              lazy: async () => ({
+                Component: (await import('./routes/overview')).OverviewRoute,
+              }),
+            },
+            {
+              path: paths.complianceReport.path,
+              handle: handle('overview'),
+              lazy: async () => ({
+                Component: (await import('./routes/compliance-report')).ComplianceReportRoute,
+              }),
             },
             {
               path: paths.settings.path,

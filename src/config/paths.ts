@@ -53,6 +53,8 @@ export const paths = {
   round: sugarbushSection('round'),
   plan: sugarbushSection('plan'),
   overview: sugarbushSection('overview'),
+  /** The compliance report of one season as a printable page. */
+  complianceReport: sugarbushSection('overview/compliance-report'),
   notes: sugarbushSection('notes'),
   season: sugarbushSection('season'),
   settings: sugarbushSection('settings'),

@@ -117,6 +117,7 @@ describeOnSqlite('query plans of the hot reads', () => {
       '&sort=verdict',
       '&verdict=tap',
       '&warning=slow-growth',
+      '&share=90-95',
       '&q=Q-0',
     ]) {
       const url = `/api/sugarbushes/${team.standId}/plan?page=1&pageSize=50${query}`;
@@ -178,6 +179,29 @@ describeOnSqlite('query plans of the hot reads', () => {
   it('when the woods map, the stand figures or the advice status are read, then no statement walks a whole table', async () => {
     for (const path of ['map', 'figures', 'advice-status']) {
       const url = `/api/sugarbushes/${team.standId}/${path}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
+  it('when the trends or the compliance report are read, then no statement of the request walks a whole table', async () => {
+    for (const path of [
+      'trends',
+      'compliance?season=2025',
+      'compliance?season=2025&finding=over',
+    ]) {
+      const url = `/api/sugarbushes/${team.standId}/${path}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
+  it('when a page of the audit trail is read, by kind and by person, then no statement walks a whole table', async () => {
+    const ownerId = (await t.db('users').where({ email: team.users.owner }).first('id')).id;
+    await owner.agent
+      .patch(`/api/sugarbushes/${team.standId}`)
+      .set('x-csrf-token', owner.csrf)
+      .send({ name: 'Test Ridge' });
+    for (const query of ['', '&kind=measurement', `&userId=${ownerId}`]) {
+      const url = `/api/sugarbushes/${team.standId}/audit?page=1&pageSize=50${query}`;
       expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
     }
   });

@@ -91,6 +91,30 @@ const cases: RouteCase[] = [
     allowed: everyone,
   },
   {
+    name: 'read the stand’s trends',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/trends`,
+    allowed: everyone,
+  },
+  {
+    name: 'read the guideline compliance of a season',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/compliance?season=2026&compare=traditional`,
+    allowed: everyone,
+  },
+  {
+    name: 'download the guideline compliance as CSV',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/compliance.csv?season=2026`,
+    allowed: everyone,
+  },
+  {
+    name: 'read the audit trail',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/audit`,
+    allowed: ['owner'],
+  },
+  {
     name: 'list the team',
     method: 'get',
     path: (i) => `/api/sugarbushes/${i.standId}/members`,

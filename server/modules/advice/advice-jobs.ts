@@ -8,6 +8,8 @@ import type { AdviceStatus } from '../../../shared/schemas/advice-status';
 import type { PlanTotals } from '../../../shared/rules/index';
 import { adviceRepository, type PlanFilter } from './advice.repository';
 import type { GuidelinePreview } from '../../../shared/schemas/guideline-preview';
+import type { EvaluatedTree, GuidelineChoice } from '../compliance/compliance-task';
+import type { TrendResult } from '../trends/stand-trends';
 import type { AdviceTask, PreviewGuideline } from './advice-worker-tasks';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
@@ -40,6 +42,20 @@ export interface AdviceJobs {
     standVersion: number,
     guideline: PreviewGuideline,
   ): Promise<GuidelinePreview>;
+  /** Every tree tapped in a season held against each guideline, in a worker, not stored. */
+  compliance(
+    sugarbushId: number,
+    season: number,
+    guidelines: GuidelineChoice[],
+  ): Promise<EvaluatedTree[]>;
+  /** Seasons with a measurement or a taphole of the stand on record (read in a worker). */
+  recordedSeasons(sugarbushId: number): Promise<number[]>;
+  /** The stand's figures season by season from each season's stored rows, in a worker. */
+  trends(
+    sugarbushId: number,
+    seasons: { season: number; standVersion: number }[],
+    upcoming: number,
+  ): Promise<TrendResult>;
   close(): Promise<void>;
 }
 
@@ -175,6 +191,18 @@ export function createAdviceJobs(opts: {
         standVersion,
         guideline,
       });
+    },
+
+    compliance(sugarbushId, season, guidelines) {
+      return task<EvaluatedTree[]>({ kind: 'compliance', sugarbushId, season, guidelines });
+    },
+
+    recordedSeasons(sugarbushId) {
+      return task<number[]>({ kind: 'recorded-seasons', sugarbushId });
+    },
+
+    trends(sugarbushId, seasons, upcoming) {
+      return task<TrendResult>({ kind: 'trends', sugarbushId, seasons, upcoming });
     },
 
     async close() {

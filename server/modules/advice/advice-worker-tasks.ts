@@ -3,8 +3,16 @@ import type { DatabaseTarget } from '../../config';
 import { openDb } from '../../db';
 import { adviseTree, type PlanTotals } from '../../../shared/rules/index';
 import type { GuidelinePreview } from '../../../shared/schemas/guideline-preview';
+import {
+  evaluateCompliance,
+  type EvaluatedTree,
+  type GuidelineChoice,
+} from '../compliance/compliance-task';
 import { diffPlans } from '../plans/plan-diff';
 import { loadStandTrees } from '../plans/plans.repository';
+import type { TrendResult } from '../trends/stand-trends';
+import { computeTrends } from '../trends/trends-task';
+import { trendsRepository } from '../trends/trends.repository';
 import { adviceRepository, type PlanFilter } from './advice.repository';
 import { adviseAndStore } from './advise-and-store';
 import { profileOf, standGuideline } from './stand-guideline';
@@ -27,7 +35,17 @@ export type AdviceTask =
   /** The ids of the current rows matching a filter, in a sort's order. */
   | (OnStand & { kind: 'order'; standVersion: number; filter: PlanFilter & { sort?: string } })
   /** The stored plan against every tree under another guideline, which is not stored. */
-  | (OnStand & { kind: 'preview'; standVersion: number; guideline: PreviewGuideline });
+  | (OnStand & { kind: 'preview'; standVersion: number; guideline: PreviewGuideline })
+  /** Every tree tapped in the season, held against each guideline (not stored). */
+  | (OnStand & { kind: 'compliance'; guidelines: GuidelineChoice[] })
+  /** Seasons with a measurement or a taphole of the stand on record. */
+  | (Omit<OnStand, 'season'> & { kind: 'recorded-seasons' })
+  /** The stand's figures season by season from its record and each season's stored advice. */
+  | (Omit<OnStand, 'season'> & {
+      kind: 'trends';
+      seasons: { season: number; standVersion: number }[];
+      upcoming: number;
+    });
 
 /** A guideline to preview: a profile key (or `custom` with its JSON), and both sides' names. */
 export interface PreviewGuideline {
@@ -54,8 +72,14 @@ function dbFor(target: DatabaseTarget): Knex {
 
 export async function runAdviceTask(
   task: AdviceTask,
-): Promise<number[] | number | PlanTotals | GuidelinePreview> {
+): Promise<number[] | number | PlanTotals | GuidelinePreview | EvaluatedTree[] | TrendResult> {
   const db = dbFor(task.database);
+  if (task.kind === 'recorded-seasons')
+    return trendsRepository(db).recordedSeasons(task.sugarbushId);
+  if (task.kind === 'trends')
+    return computeTrends(db, task.sugarbushId, task.seasons, task.upcoming);
+  if (task.kind === 'compliance')
+    return evaluateCompliance(db, task.sugarbushId, task.season, task.guidelines);
   if (task.kind === 'stale')
     return adviceRepository(db).staleTreeIds(task.sugarbushId, task.season, task.standVersion);
   if (task.kind === 'totals')

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { warningCodes, type PlanTotals, type WarningCode } from '../../../shared/rules/index';
+import { shareBands, sharedVerdicts } from '../../../shared/schemas/share-bands';
 import { adviceColumns, warningBit, type AdviceRow } from './advice-rows';
 
 /** Verdicts without a meaningful conductive share: they sort after every tapped tree. */
@@ -20,6 +21,8 @@ export interface PlanFilter {
   q?: string;
   verdict?: string;
   warning?: string;
+  /** A conductive-share band (`shareBands`): trees big enough to tap whose share lies in it. */
+  share?: string;
 }
 
 export type PlanSortKey = 'tag' | 'taps' | 'dbh' | 'share' | 'verdict';
@@ -45,11 +48,17 @@ export function adviceRepository(db: Knex) {
     f: PlanFilter,
   ): Knex.QueryBuilder | null => {
     if (f.warning && !(warningCodes as readonly string[]).includes(f.warning)) return null;
+    const band = f.share === undefined ? undefined : shareBands.find((b) => b.key === f.share);
+    if (f.share !== undefined && !band) return null;
     return current(sugarbushId, season, standVersion).modify((q) => {
       if (f.q) q.whereRaw('lower(t.tag) like ?', [`%${f.q.toLowerCase()}%`]);
       if (f.verdict) q.where('a.verdict', f.verdict);
       if (f.warning)
         q.whereRaw('(a.warning_mask & ?) <> 0', [warningBit(f.warning as WarningCode)]);
+      if (band) {
+        q.whereIn('a.verdict', sharedVerdicts).where('a.conductive_share', '>=', band.min);
+        if (band.max !== null) q.where('a.conductive_share', '<', band.max);
+      }
     });
   };
 

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
-import type { StandTree } from '../../../shared/rules/index';
+import type { StandTree, StatusChange } from '../../../shared/rules/index';
+import { treeStatuses } from '../../../shared/schemas/enums';
 
 export type RecordedTree = StandTree & { id: number; tag: string; recordVersion: number };
 
@@ -50,6 +51,8 @@ export async function loadStandTrees(
       'h.collection',
     );
 
+  const history = await statusHistories(db, sugarbushId, some);
+
   const byId = new Map<
     number,
     RecordedTree & {
@@ -64,6 +67,7 @@ export async function loadStandTrees(
       species: t.species,
       status: t.status,
       recordVersion: Number(t.record_version),
+      ...(history.has(t.id) ? { statusHistory: history.get(t.id) } : {}),
       measurements: [],
       tapholes: [],
     });
@@ -86,4 +90,48 @@ export async function loadStandTrees(
     });
   }
   return ids.map((id) => byId.get(id)!);
+}
+
+/**
+ * The statuses the audit trail gave trees, oldest first, by tree: the status a tree was created
+ * with and every change of it. The advice for a season reads the status the tree had then.
+ */
+export async function statusHistories(
+  db: Knex,
+  sugarbushId: number,
+  only: readonly number[] | null,
+): Promise<Map<number, StatusChange[]>> {
+  const rows: { entity_id: number; action: string; detail: string; created_at: string }[] =
+    await db('audit_events as e')
+      .where('e.sugarbush_id', sugarbushId)
+      .where('e.entity', 'tree')
+      .modify((q) => {
+        if (only) q.whereIn('e.entity_id', only);
+      })
+      .whereIn('e.action', ['create', 'update'])
+      .where('e.detail', 'like', '%"status"%')
+      .orderBy([
+        { column: 'e.created_at', order: 'asc' },
+        { column: 'e.id', order: 'asc' },
+      ])
+      .select('e.entity_id', 'e.action', 'e.detail', 'e.created_at');
+  const byTree = new Map<number, StatusChange[]>();
+  for (const r of rows) {
+    let status: unknown;
+    try {
+      status = (JSON.parse(r.detail) as { status?: unknown } | null)?.status;
+    } catch {
+      continue; // a detail that is not JSON names no status
+    }
+    if (typeof status !== 'string' || !(treeStatuses as readonly string[]).includes(status))
+      continue;
+    const id = Number(r.entity_id);
+    const change: StatusChange = {
+      on: String(r.created_at).slice(0, 10),
+      status: status as StatusChange['status'],
+      ...(r.action === 'create' ? { created: true } : {}),
+    };
+    byTree.set(id, [...(byTree.get(id) ?? []), change]);
+  }
+  return byTree;
 }

@@ -81,7 +81,7 @@ export function plansService(ctx: AppContext) {
   ) {
     const offset = (q.page - 1) * q.pageSize;
     const sortKey = (q.sort ?? 'tag').replace(/^-/, '');
-    if (!q.q && !q.verdict && !q.warning && sortKey === 'tag') {
+    if (!q.q && !q.verdict && !q.warning && !q.share && sortKey === 'tag') {
       const [items, totals] = await Promise.all([
         store.tagPage(sugarbushId, season, version, {
           descending: q.sort === '-tag',
@@ -92,7 +92,7 @@ export function plansService(ctx: AppContext) {
       ]);
       return { items, total: totals.trees };
     }
-    const filter = { q: q.q, verdict: q.verdict, warning: q.warning, sort: q.sort };
+    const filter = { q: q.q, verdict: q.verdict, warning: q.warning, share: q.share, sort: q.sort };
     const key = `${stamp}:${season}:${version}:order:${JSON.stringify(filter)}`;
     const ids = await keep(key, () => ctx.advice.orderedIds(sugarbushId, season, version, filter));
     const pageIds = ids.slice(offset, offset + q.pageSize);

@@ -31,18 +31,16 @@ export function tapholesRoutes(ctx: AppContext) {
     async (_req, res) => {
       const { sugarbushId, userId } = accessOf(res);
       const treeId = res.locals.treeId as number;
+      const input = parsed<TapholeInput>(res, 'body');
       const hole = await ctx.db.transaction(async (trx) => {
-        const made = await tapholesRepository(trx).create(
-          treeId,
-          userId,
-          parsed<TapholeInput>(res, 'body'),
-        );
+        const made = await tapholesRepository(trx).create(treeId, userId, input);
         await auditRepository(trx).record({
           sugarbushId,
           userId,
           action: 'create',
           entity: 'taphole',
           entityId: made.id,
+          detail: input,
         });
         await refreshTrees(trx, sugarbushId, [treeId]);
         return made;

@@ -38,10 +38,18 @@ export interface TreeFilters {
   q?: string;
   status?: string;
   species?: string;
+  /** A 5 % crown-dieback class: the tree's latest rating, or its rating of `diebackSeason`. */
+  dieback?: number;
+  diebackSeason?: number;
   sort?: string;
   offset: number;
   limit: number;
 }
+
+const seasonRating = `select m.crown_dieback_pct from measurements m
+  where m.tree_id = t.id and m.season = ? and m.crown_dieback_pct is not null
+    and not exists (select 1 from measurements c where c.corrects_id = m.id)
+  order by m.measured_on desc, m.id desc limit 1`;
 
 export function treesRepository(db: Knex) {
   // The latest standing measurement is kept on the tree row (see refreshTrees), so a page of
@@ -72,6 +80,23 @@ export function treesRepository(db: Knex) {
           if (f.q) qb.whereILike('t.tag', `%${f.q}%`);
           if (f.status) qb.where('t.status', f.status);
           if (f.species) qb.where('t.species', f.species);
+          if (f.dieback !== undefined) {
+            const range = [f.dieback, f.dieback + 5];
+            if (f.diebackSeason === undefined)
+              qb.where('t.latest_crown_dieback_pct', '>=', range[0]).where(
+                't.latest_crown_dieback_pct',
+                '<',
+                range[1],
+              );
+            // The season's own rating: the latest no later row corrects.
+            else
+              qb.whereRaw(`(${seasonRating}) >= ? and (${seasonRating}) < ?`, [
+                f.diebackSeason,
+                range[0],
+                f.diebackSeason,
+                range[1],
+              ]);
+          }
         });
       const n = await countOf(async () => Number((await q.clone().count({ n: '*' }))[0].n));
       const desc = f.sort?.startsWith('-') ?? false;

@@ -5,6 +5,7 @@ import { accessOf, requirePermission, sugarbushAccess, treeAccess } from '../../
 import { parsed, validate } from '../../middleware/validate';
 import { speciesSchema, treeStatusSchema } from '../../../shared/schemas/enums';
 import { listQuerySchema } from '../../../shared/schemas/list-query';
+import { seasonSchema } from '../../../shared/schemas/plan';
 import { treeInputSchema, treePatchSchema, type TreePatch } from '../../../shared/schemas/tree';
 import { treesService } from './trees.service';
 
@@ -14,6 +15,9 @@ export const treeListQuerySchema = listQuerySchema.extend({
     .optional(),
   status: treeStatusSchema.optional(),
   species: speciesSchema.optional(),
+  /** Trees whose crown rating falls in this 5 % class (the latest, or `diebackSeason`'s). */
+  dieback: z.coerce.number().int().min(0).max(100).multipleOf(5).optional(),
+  diebackSeason: seasonSchema.optional(),
 });
 export type TreeListQuery = z.output<typeof treeListQuerySchema>;
 

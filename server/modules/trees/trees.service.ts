@@ -25,7 +25,7 @@ export function treesService(ctx: AppContext) {
   return {
     async list(sugarbushId: number, q: TreeListQuery): Promise<Page<Tree>> {
       const stamp = await counts.stamp(sugarbushId);
-      const filter = JSON.stringify([q.q, q.status, q.species]);
+      const filter = JSON.stringify([q.q, q.status, q.species, q.dieback, q.diebackSeason]);
       return pageOf(q, (range) =>
         repo.list(sugarbushId, { ...q, ...range }, (count) =>
           counts.keep(`${stamp}:trees:${filter}`, count),

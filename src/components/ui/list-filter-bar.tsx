@@ -21,7 +21,7 @@ export function ListFilterBar<F extends { q?: string }>({
     [onChange],
   );
   return (
-    <div className={cn('mb-4 grid grid-cols-2 gap-3 sm:grid-cols-3', className)}>
+    <div className={cn('mb-4 grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4', className)}>
       <div className="col-span-2 sm:col-span-1">
         <TagSearch value={filters.q ?? ''} onSearch={onSearch} />
       </div>

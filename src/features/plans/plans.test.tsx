@@ -202,6 +202,16 @@ describe('the season plan', () => {
     expect(await screen.findByRole('table', { name: 'Season plan' })).toBeInTheDocument();
   });
 
+  it('when opened from a clear-wood band of the overview, then the plan asks for that band and shows it chosen', async () => {
+    const { api, user } = openPlan({}, 'metric', '/sugarbushes/3/plan?season=2026&share=80-85');
+    await screen.findByRole('table', { name: 'Season plan' });
+    expect(lastPlanRequest(api).get('share')).toBe('80-85');
+    expect(lastPlanRequest(api).get('season')).toBe('2026');
+    expect(screen.getByLabelText('Clear wood')).toHaveValue('80-85');
+    await user.selectOptions(screen.getByLabelText('Clear wood'), '');
+    await waitFor(() => expect(lastPlanRequest(api).get('share')).toBeNull());
+  });
+
   it('prints the field sheet with the browser', async () => {
     const print = vi.fn();
     vi.stubGlobal('print', print);

@@ -150,4 +150,21 @@ describe('the tree register', () => {
     const link = await screen.findByRole('link', { name: '0001' });
     expect(link).toHaveAttribute('href', '/trees/100');
   });
+
+  // Crown dieback in 5 % classes (USFS Crown Condition Rating Guide, Millers et al. 1992 — P).
+  it('when opened from a crown-dieback class of the overview, then it asks for that class of that round and offers every crown again', async () => {
+    const { api, user } = openRegister(
+      {},
+      'metric',
+      '/sugarbushes/3/trees?dieback=20&diebackSeason=2024',
+    );
+    expect(
+      await screen.findByText('Crown rated 20 % dieback in the 2024 round'),
+    ).toBeInTheDocument();
+    expect(lastListRequest(api).get('dieback')).toBe('20');
+    expect(lastListRequest(api).get('diebackSeason')).toBe('2024');
+    await user.click(screen.getByRole('button', { name: 'Any crown' }));
+    await waitFor(() => expect(lastListRequest(api).get('dieback')).toBeNull());
+    expect(lastListRequest(api).get('diebackSeason')).toBeNull();
+  });
 });

@@ -1,5 +1,6 @@
 import type { VerdictKey, WarningCode } from '@shared/rules/index';
 import type { PlanQuery } from '@shared/schemas/plan';
+import type { ShareBandKey } from '@shared/schemas/share-bands';
 import { queryRoots } from '@/lib/query-roots';
 
 export type PlanSort = NonNullable<PlanQuery['sort']>;
@@ -13,6 +14,8 @@ export interface PlanFilters {
   q?: string;
   verdict?: VerdictKey;
   warning?: WarningCode;
+  /** A conductive-share band: trees big enough to tap whose share lies in it. */
+  share?: ShareBandKey;
 }
 
 export const planKeys = {

@@ -1,4 +1,5 @@
 import { verdicts, warningCodes, type VerdictKey, type WarningCode } from '@shared/rules/index';
+import { shareBandKeys, type ShareBandKey } from '@shared/schemas/share-bands';
 import { bothWays, oneOf, parseListParams, useListSearchParams } from '@/lib/list-search-params';
 import { parseSeason, seasonParam } from '@/lib/season';
 import { PLAN_PAGE_SIZE } from '../api/get-season-plan';
@@ -12,6 +13,7 @@ const parsePlanParams = (params: URLSearchParams): PlanFilters => ({
   ...parseListParams(params, { sorts, defaultSort: 'tag', pageSize: PLAN_PAGE_SIZE }),
   verdict: oneOf<VerdictKey>(verdictKeys, params.get('verdict')),
   warning: oneOf<WarningCode>(warningCodes, params.get('warning')),
+  share: oneOf<ShareBandKey>(shareBandKeys, params.get('share')),
 });
 
 /** The upcoming season is the default, so it stays out of the URL. */

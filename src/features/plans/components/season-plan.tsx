@@ -34,7 +34,7 @@ export function SeasonPlan({
   const { filters, update } = usePlanSearchParams();
   const { system } = useUnitSystem();
   const plan = useSeasonPlan(sugarbushId, filters);
-  const filtered = Boolean(filters.q || filters.verdict || filters.warning);
+  const filtered = Boolean(filters.q || filters.verdict || filters.warning || filters.share);
   const data = plan.data;
 
   const header = (
@@ -99,7 +99,9 @@ export function SeasonPlan({
         sugarbushId={sugarbushId}
         filtered={filtered}
         q={filters.q}
-        onClear={() => update({ q: undefined, verdict: undefined, warning: undefined })}
+        onClear={() =>
+          update({ q: undefined, verdict: undefined, warning: undefined, share: undefined })
+        }
       />
     ) : (
       <>

@@ -14,6 +14,9 @@ export interface TreeListFilters {
   q?: string;
   status?: TreeStatus;
   species?: Species;
+  /** A 5 % crown-dieback class: the latest rating's, or the rating of `diebackSeason`. */
+  dieback?: number;
+  diebackSeason?: number;
 }
 
 export const treeKeys = {

@@ -3,6 +3,7 @@ import { speciesLabels } from '@shared/schemas/enums';
 import type { Tree } from '@shared/schemas/tree';
 import { TreeListEmpty } from '@/components/tree-list-empty';
 import { TreeStatusLabel } from '@/components/tree-status-label';
+import { Button } from '@/components/ui/button';
 import { DataTable, type Column } from '@/components/ui/data-table';
 import { ErrorState } from '@/components/ui/error-state';
 import { Pager } from '@/components/ui/pager';
@@ -62,9 +63,31 @@ export function TreeRegister({ sugarbushId }: { sugarbushId: number }) {
   const { filters, update } = useRegisterSearchParams();
   const { unit } = useUnitSystem();
   const trees = useTrees(sugarbushId, filters);
-  const filtered = Boolean(filters.q || filters.status || filters.species);
+  const filtered = Boolean(
+    filters.q || filters.status || filters.species || filters.dieback !== undefined,
+  );
 
-  const filterBar = <TreeRegisterFilters filters={filters} onChange={update} />;
+  const filterBar = (
+    <>
+      <TreeRegisterFilters filters={filters} onChange={update} />
+      {filters.dieback !== undefined && (
+        <p className="mb-4 flex flex-wrap items-center gap-3 text-sm">
+          <span>
+            Crown rated {filters.dieback} % dieback
+            {filters.diebackSeason === undefined
+              ? ' at the latest rating'
+              : ` in the ${filters.diebackSeason} round`}
+          </span>
+          <Button
+            variant="quiet"
+            onClick={() => update({ dieback: undefined, diebackSeason: undefined })}
+          >
+            Any crown
+          </Button>
+        </p>
+      )}
+    </>
+  );
 
   if (trees.isPending) {
     return (
@@ -96,7 +119,15 @@ export function TreeRegister({ sugarbushId }: { sugarbushId: number }) {
           sugarbushId={sugarbushId}
           filtered={filtered}
           q={filters.q}
-          onClear={() => update({ q: undefined, status: undefined, species: undefined })}
+          onClear={() =>
+            update({
+              q: undefined,
+              status: undefined,
+              species: undefined,
+              dieback: undefined,
+              diebackSeason: undefined,
+            })
+          }
         />
       </>
     );

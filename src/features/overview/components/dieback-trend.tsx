@@ -1,0 +1,108 @@
+import { Bar, BarChart, Legend, Tooltip, XAxis, YAxis } from 'recharts';
+import { diebackGroups, type TrendSeason, type TrendsResponse } from '@shared/schemas/trends';
+import { axisProps, tooltipStyle } from '@/components/ui/chart-frame';
+import { paths } from '@/config/paths';
+import { colors } from '@/lib/theme';
+import { formatNumber } from '@/lib/units';
+import { diebackSentence, percent } from '../lib/trend-words';
+import {
+  ChartBox,
+  chartFont,
+  chartMargin,
+  legendProps,
+  percentTicks,
+  seasonTick,
+  unitTick,
+} from './chart-kit';
+import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
+
+const groupColours = [colors.moss, colors.advice.rest, colors.sap, colors.alert];
+
+const inGroup = (i: TrendSeason, from: number, to: number) =>
+  i.crownClasses.filter((c) => c.pct >= from && c.pct <= to).reduce((n, c) => n + c.trees, 0);
+
+/**
+ * Crown ratings of each season's round, in the 5 % classes they are given in (USFS Crown
+ * Condition Rating Guide): the chart groups them by what they indicate, the table lists each.
+ */
+export function DiebackTrend({ trends }: { trends: TrendsResponse }) {
+  const id = trends.sugarbushId;
+  const rated = trends.items.filter((i) => i.crownRated > 0);
+  const classes = [...new Set(rated.flatMap((i) => i.crownClasses.map((c) => c.pct)))].sort(
+    (a, b) => a - b,
+  );
+  const data = rated.map((i) => ({
+    x: seasonTick(i),
+    ...Object.fromEntries(
+      diebackGroups.map((g) => [g.key, (100 * inGroup(i, g.fromPct, g.toPct)) / i.crownRated]),
+    ),
+  }));
+  return (
+    <TrendFigure
+      title="Crown dieback"
+      sentence={diebackSentence(trends)}
+      chart={
+        <ChartBox>
+          <BarChart data={data} margin={chartMargin}>
+            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
+            <YAxis
+              width={56}
+              tickFormatter={unitTick('%')}
+              domain={[0, 100]}
+              ticks={percentTicks}
+              {...axisProps(chartFont)}
+            />
+            <Tooltip
+              contentStyle={tooltipStyle}
+              formatter={(v) => `${formatNumber(Number(v), 1)} %`}
+            />
+            <Legend {...legendProps} />
+            {diebackGroups.map((g, n) => (
+              <Bar
+                key={g.key}
+                dataKey={g.key}
+                name={g.label}
+                stackId="crown"
+                fill={groupColours[n]}
+                isAnimationActive={false}
+              />
+            ))}
+          </BarChart>
+        </ChartBox>
+      }
+      table={
+        <TrendTable
+          label="Crown dieback classes by season"
+          items={rated}
+          columns={[
+            ...classes.map((pct) => ({
+              key: String(pct),
+              header: `${pct} %`,
+              cell: (i: TrendSeason) => {
+                const n = i.crownClasses.find((c) => c.pct === pct)?.trees ?? 0;
+                return n === 0 ? (
+                  '0'
+                ) : (
+                  <FigureLink to={paths.trees.href(id, { dieback: pct, diebackSeason: i.season })}>
+                    {formatNumber(n)}
+                  </FigureLink>
+                );
+              },
+            })),
+            {
+              key: 'over',
+              header: 'Over 15 %',
+              cell: (i) =>
+                percent(
+                  i.crownClasses.filter((c) => c.pct > 15).reduce((n, c) => n + c.trees, 0),
+                  i.crownRated,
+                  1,
+                ),
+            },
+            { key: 'rated', header: 'Crowns rated', cell: (i) => formatNumber(i.crownRated) },
+          ]}
+        />
+      }
+    />
+  );
+}
