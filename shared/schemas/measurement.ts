@@ -36,6 +36,11 @@ export const measurementInputSchema = z.object({
    * a year, or a shrink beyond tape error). Without it such a reading is refused.
    */
   confirmedOutlier: z.boolean().optional(),
+  /**
+   * An id made on the device that recorded the entry (a UUID). Sending the same entry again (a
+   * retry after a lost answer, a queue replayed after a reload) stores it once.
+   */
+  clientId: z.string().uuid('A client id is a UUID').optional(),
 });
 export type MeasurementInput = z.infer<typeof measurementInputSchema>;
 

@@ -14,6 +14,11 @@ export const tapholeInputSchema = z.object({
     .nullable()
     .optional(),
   stainHit: z.boolean().nullable().optional(),
+  /**
+   * An id made on the device that recorded the entry (a UUID). Sending the same entry again (a
+   * retry after a lost answer, a queue replayed after a reload) stores it once.
+   */
+  clientId: z.string().uuid('A client id is a UUID').optional(),
 });
 export type TapholeInput = z.infer<typeof tapholeInputSchema>;
 

@@ -1,6 +1,7 @@
 import { QueryCache, QueryClient, MutationCache } from '@tanstack/react-query';
 import { isApiError } from './api-client';
 import { authKeys } from './auth';
+import { registerFieldEntryDefaults } from './field-entries';
 
 const MAX_RETRIES = 2;
 
@@ -26,5 +27,6 @@ export function createQueryClient(): QueryClient {
       mutations: { retry: false },
     },
   });
+  registerFieldEntryDefaults(queryClient);
   return queryClient;
 }

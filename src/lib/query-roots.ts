@@ -11,4 +11,7 @@ export const queryRoots = {
   map: ['map'],
   /** Notes, their photos and the needs-a-look queue. */
   notes: ['notes'],
+  /** A tree's readings and its holes, which field entries add to. */
+  measurements: ['measurements'],
+  tapholes: ['tapholes'],
 } as const;

@@ -1,5 +1,7 @@
+import { queryRoots } from '@/lib/query-roots';
+
 export const measurementKeys = {
-  all: ['measurements'] as const,
+  all: queryRoots.measurements,
   lists: () => [...measurementKeys.all, 'list'] as const,
   list: (treeId: number) => [...measurementKeys.lists(), treeId] as const,
 };

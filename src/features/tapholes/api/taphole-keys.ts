@@ -1,5 +1,7 @@
+import { queryRoots } from '@/lib/query-roots';
+
 export const tapholeKeys = {
-  all: ['tapholes'] as const,
+  all: queryRoots.tapholes,
   lists: () => [...tapholeKeys.all, 'list'] as const,
   list: (treeId: number) => [...tapholeKeys.lists(), treeId] as const,
 };

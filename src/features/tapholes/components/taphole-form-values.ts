@@ -141,6 +141,8 @@ function rangeMessage(field: TapholeField, system: UnitSystem): string {
       return 'Choose how the sap is collected';
     case 'stainHit':
       return 'Tick the box if the shavings came out brown or yellow';
+    case 'clientId':
+      return 'This entry has no valid id: record it again';
   }
 }
 
