@@ -43,6 +43,8 @@ describe('a hazard note reaches the tapper, in a real browser', () => {
     const notes = consultant.getByRole('list', { name: `Notes on tree ${tree.tag}` });
     const thumb = notes.getByRole('img', { name: /Photo 1 of the note/ });
     await thumb.waitFor();
+    // Thumbnails load lazily: bring this one into view, as a reader scrolling to it would.
+    await thumb.scrollIntoViewIfNeeded();
     await expect
       .poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth))
       .toBeGreaterThan(0);
