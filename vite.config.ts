@@ -45,6 +45,9 @@ export default defineConfig({
           globals: true,
           include: ['src/**/*.test.{ts,tsx}'],
           setupFiles: ['src/test/setup.ts'],
+          // Interaction tests type and click through whole pages in jsdom; on a busy two-core
+          // machine some take several seconds.
+          testTimeout: 20000,
         },
       },
       {

@@ -20,6 +20,16 @@ describe('the sentences that read the trends', () => {
     expect(basalAreaSentence(seasons(86.2, 85.9), 'imperial')).toBe(
       'Basal area per acre held at 86 ft² from 2020 to 2021',
     );
+    // A thinning between the ends is named, so "held" never hides a dip.
+    expect(basalAreaSentence(seasons(103, 110, 93, 98, 103.2), 'imperial')).toBe(
+      'Basal area per acre was 103 ft² in 2020 and again in 2024, lowest at 93 ft² in 2022',
+    );
+    expect(basalAreaSentence(seasons(86, 80, 92), 'imperial')).toBe(
+      'Basal area per acre rose from 86 to 92 ft² since 2020, lowest at 80 ft² in 2021',
+    );
+    expect(basalAreaSentence(seasons(86, 84, 92), 'imperial')).toBe(
+      'Basal area per acre rose from 86 to 92 ft² since 2020',
+    );
     expect(basalAreaSentence(seasons(100), 'metric')).toBe(
       'Basal area per hectare was 23.0 m² in 2020',
     );

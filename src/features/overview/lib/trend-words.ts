@@ -36,18 +36,44 @@ export const percent = (part: number, whole: number, digits = 0) =>
 const recorded = <T>(items: readonly TrendSeason[], value: (i: TrendSeason) => T | null) =>
   items.filter((i) => !i.planned && value(i) !== null);
 
+interface Point {
+  season: number;
+  text: string;
+  n: number;
+}
+
+/** A low or a high between the first and last seasons, when it stands out (over 5 % beyond both). */
+function turn(points: readonly Point[], unit: string): string {
+  if (points.length < 3) return '';
+  const first = points[0];
+  const last = points.at(-1)!;
+  const inner = points.slice(1, -1);
+  const low = inner.reduce((a, b) => (b.n < a.n ? b : a));
+  const high = inner.reduce((a, b) => (b.n > a.n ? b : a));
+  if (low.n < Math.min(first.n, last.n) * 0.95)
+    return `, lowest at ${low.text}${unit} in ${low.season}`;
+  if (high.n > Math.max(first.n, last.n) * 1.05)
+    return `, highest at ${high.text}${unit} in ${high.season}`;
+  return '';
+}
+
+/** The first and last seasons compared, with a low or high between them if one stands out. */
 function change(
   what: string,
-  first: { season: number; text: string; n: number },
-  last: { season: number; text: string; n: number },
+  points: readonly Point[],
   unit: string,
   [up, down] = ['rose', 'fell'],
 ) {
+  const first = points[0];
+  const last = points.at(-1)!;
   if (first.season === last.season) return `${what} was ${last.text}${unit} in ${last.season}`;
+  const between = turn(points, unit);
   if (first.text === last.text)
-    return `${what} held at ${last.text}${unit} from ${first.season} to ${last.season}`;
+    return between
+      ? `${what} was ${last.text}${unit} in ${first.season} and again in ${last.season}${between}`
+      : `${what} held at ${last.text}${unit} from ${first.season} to ${last.season}`;
   const verb = last.n > first.n ? up : down;
-  return `${what} ${verb} from ${first.text} to ${last.text}${unit} since ${first.season}`;
+  return `${what} ${verb} from ${first.text} to ${last.text}${unit} since ${first.season}${between}`;
 }
 
 /** "Basal area per acre rose from 86 to 92 ft² since 2018". */
@@ -60,7 +86,7 @@ export function basalAreaSentence(t: TrendsResponse, system: UnitSystem): string
     const n = basalPerArea(i, system)!;
     return { season: i.season, n, text: formatNumber(n, w.basalDigits) };
   };
-  return change(`Basal area per ${w.per}`, at(seasons[0]), at(seasons.at(-1)!), ` ${w.basal}`);
+  return change(`Basal area per ${w.per}`, seasons.map(at), ` ${w.basal}`);
 }
 
 const living = (i: TrendSeason) => i.byStatus.active + i.byStatus['held-out'];
@@ -86,7 +112,7 @@ export function dbhSentence(t: TrendsResponse, system: UnitSystem): string {
     const n = system === 'imperial' ? i.dbhCm!.median / 2.54 : i.dbhCm!.median;
     return { season: i.season, n, text: formatNumber(n, 1) };
   };
-  return change('Median DBH', at(seasons[0]), at(seasons.at(-1)!), ` ${unit}`, ['grew', 'shrank']);
+  return change('Median DBH', seasons.map(at), ` ${unit}`, ['grew', 'shrank']);
 }
 
 /** "Median basal-area growth was lowest in 2020 (3.8 in²) and highest in 2023 (6.0 in²)". */
