@@ -125,7 +125,7 @@ export function SeasonPlan({
     <>
       {header}
       <SeasonProgressBar sugarbushId={sugarbushId} season={filters.season} />
-      <IssuePanel sugarbushId={sugarbushId} season={filters.season} />
+      <IssuePanel key={filters.season} sugarbushId={sugarbushId} season={filters.season} />
       <GuidelineNotice notice={data.profile.notice} />
       {data.profile.seasonRules.length > 0 && (
         <section aria-labelledby="season-rules-heading" className="mb-4">
