@@ -115,17 +115,14 @@ export function issuedPlansRepository(db: Knex) {
     },
 
     /** A page of the frozen copy in tag order (the (plan, tag) index gives it). */
-    async itemsPage(planId: number, offset: number, limit: number) {
-      const [rows, count] = await Promise.all([
-        db('issued_plan_trees')
-          .where({ issued_plan_id: planId })
-          .orderBy('tag')
-          .offset(offset)
-          .limit(limit)
-          .select<IssuedTreeRow[]>('*'),
-        db('issued_plan_trees').where({ issued_plan_id: planId }).count({ n: '*' }).first(),
-      ]);
-      return { items: rows.map(issuedItem), total: Number(count?.n ?? 0) };
+    async itemsPage(planId: number, offset: number, limit: number): Promise<IssuedItem[]> {
+      const rows: IssuedTreeRow[] = await db('issued_plan_trees')
+        .where({ issued_plan_id: planId })
+        .orderBy('tag')
+        .offset(offset)
+        .limit(limit)
+        .select('*');
+      return rows.map(issuedItem);
     },
 
     /** These trees' lines of the frozen copy, by tree id. */

@@ -85,7 +85,8 @@ export function issuedPlansService(ctx: AppContext) {
       return {
         plan,
         latestVersion,
-        items: { ...items, page: q.page, pageSize: q.pageSize },
+        // The copy holds a row for every tree it counted.
+        items: { items, total: plan.totals.trees, page: q.page, pageSize: q.pageSize },
         changes: {
           items: all.changes.slice(from, from + q.changesPageSize),
           total: all.changes.length,
