@@ -57,8 +57,7 @@ describe('the printed field sheet, in a real browser', () => {
     await copy.getByRole('button', { name: 'Issue this plan to the crew' }).click();
     await copy.getByRole('button', { name: 'Issue version 1' }).click();
     await copy
-      .getByText(/by Fern|— version 1/)
-      .first()
+      .getByText(/^Issued to the crew on .+ by Hollis Pembrook — version 1, /)
       .waitFor({ timeout: 60_000 });
     await copy.getByText('Nothing has changed since it was issued', { exact: false }).waitFor();
 
