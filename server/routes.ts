@@ -5,6 +5,7 @@ import { adviceRoutes } from './modules/advice/advice.routes';
 import { auditRoutes } from './modules/audit/audit.routes';
 import { basemapsRoutes } from './modules/basemaps/basemaps.routes';
 import { complianceRoutes } from './modules/compliance/compliance.routes';
+import { issuedPlansRoutes } from './modules/issued-plans/issued-plans.routes';
 import { invitationsRoutes } from './modules/invitations/invitations.routes';
 import { membersRoutes } from './modules/members/members.routes';
 import { mapRoutes } from './modules/map/map.routes';
@@ -28,6 +29,7 @@ export function apiRoutes(ctx: AppContext) {
   router.use(notesRoutes(ctx));
   router.use(photosRoutes(ctx));
   router.use(plansRoutes(ctx));
+  router.use(issuedPlansRoutes(ctx));
   router.use(adviceRoutes(ctx));
   router.use(mapRoutes(ctx));
   router.use(trendsRoutes(ctx));

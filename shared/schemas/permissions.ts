@@ -18,6 +18,8 @@ export const permissions = {
   'manage-members': ['owner'],
   /** Who recorded, corrected or changed what in the stand, and when. */
   'read-audit': ['owner'],
+  /** Freeze a season's plan as the copy the crew works from. */
+  'issue-plan': ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;
@@ -33,6 +35,7 @@ export const permissionLabels: Record<Permission, string> = {
   'choose-guideline': 'Choose the tapping guideline',
   'manage-members': 'Invite people, change roles, remove members',
   'read-audit': 'Read the record of who changed what',
+  'issue-plan': 'Issue the season’s plan to the crew',
 };
 
 export function can(role: Role | null | undefined, action: Permission): boolean {

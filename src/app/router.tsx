@@ -99,6 +99,13 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               }),
             },
             {
+              path: paths.fieldSheet.path,
+              handle: handle('plan'),
+              lazy: async () => ({
+                Component: (await import('./routes/field-sheet')).FieldSheetRoute,
+              }),
+            },
+            {
               path: paths.map.path,
               handle: handle('map'),
               lazy: async () => ({

@@ -52,6 +52,8 @@ export const paths = {
   map: sugarbushSection('map'),
   round: sugarbushSection('round'),
   plan: sugarbushSection('plan'),
+  /** Every tree to tap, in walking order, as a sheet to print (takes the plan's filters). */
+  fieldSheet: sugarbushSection('plan/field-sheet'),
   overview: sugarbushSection('overview'),
   /** The compliance report of one season as a printable page. */
   complianceReport: sugarbushSection('overview/compliance-report'),

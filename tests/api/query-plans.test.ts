@@ -194,6 +194,26 @@ describeOnSqlite('query plans of the hot reads', () => {
     }
   });
 
+  it('when the issued plan, the season’s progress or a page of the field sheet is read, then no statement of the request walks a whole table', async () => {
+    const season = upcomingSeason();
+    const issued = await owner.agent
+      .post(`/api/sugarbushes/${team.standId}/issued-plans`)
+      .set('x-csrf-token', owner.csrf)
+      .send({ season });
+    expect(issued.status).toBe(201);
+    for (const path of [
+      `issued-plans/${season}?page=1&pageSize=5`,
+      `issued-plans/${season}?page=2&pageSize=5&changesPage=2`,
+      'issued-plans',
+      `plan/progress?season=${season}`,
+      `plan/field-sheet?season=${season}&page=2&pageSize=5`,
+      `plan/field-sheet?season=${season}&verdict=tap`,
+    ]) {
+      const url = `/api/sugarbushes/${team.standId}/${path}`;
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+    }
+  });
+
   it('when a page of the audit trail is read, by kind and by person, then no statement walks a whole table', async () => {
     const ownerId = (await t.db('users').where({ email: team.users.owner }).first('id')).id;
     await owner.agent

@@ -109,6 +109,37 @@ const cases: RouteCase[] = [
     allowed: everyone,
   },
   {
+    name: 'issue the season’s plan to the crew',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/issued-plans`,
+    body: () => ({ season: 2026 }),
+    allowed: ['owner'],
+  },
+  {
+    name: 'list the issued plans',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/issued-plans`,
+    allowed: everyone,
+  },
+  {
+    name: 'read an issued plan with its changes since',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/issued-plans/2026`,
+    allowed: everyone,
+  },
+  {
+    name: 'read the season’s progress',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/plan/progress?season=2026`,
+    allowed: everyone,
+  },
+  {
+    name: 'read a page of the field sheet',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/plan/field-sheet?season=2026`,
+    allowed: everyone,
+  },
+  {
     name: 'read the audit trail',
     method: 'get',
     path: (i) => `/api/sugarbushes/${i.standId}/audit`,
@@ -291,6 +322,12 @@ beforeAll(async () => {
     .post(`/api/trees/${team.treeId}/photos`)
     .set('x-csrf-token', csrf)
     .attach('file', photo, 'first.png');
+  // A plan issued before the matrix runs, so every reader has one to read.
+  const issued = await agents.owner.agent
+    .post(`/api/sugarbushes/${team.standId}/issued-plans`)
+    .set('x-csrf-token', agents.owner.csrf)
+    .send({ season: 2026 });
+  if (issued.status !== 201) throw new Error(`issuing failed: ${JSON.stringify(issued.body)}`);
   ids = {
     standId: team.standId,
     treeId: team.treeId,

@@ -11,6 +11,7 @@ import type { GuidelinePreview } from '../../../shared/schemas/guideline-preview
 import type { EvaluatedTree, GuidelineChoice } from '../compliance/compliance-task';
 import type { TrendResult } from '../trends/stand-trends';
 import type { AdviceTask, PreviewGuideline } from './advice-worker-tasks';
+import type { IssuedPlanTask } from '../issued-plans/issued-plan-tasks';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
 const CHUNK = 500;
@@ -56,6 +57,8 @@ export interface AdviceJobs {
     seasons: { season: number; standVersion: number }[],
     upcoming: number,
   ): Promise<TrendResult>;
+  /** Issuing a plan and reading the issued copy against the stand, in a worker. */
+  issuedPlan<T>(task: IssuedPlanTask): Promise<T>;
   close(): Promise<void>;
 }
 
@@ -203,6 +206,10 @@ export function createAdviceJobs(opts: {
 
     trends(sugarbushId, seasons, upcoming) {
       return task<TrendResult>({ kind: 'trends', sugarbushId, seasons, upcoming });
+    },
+
+    issuedPlan<T>(t: IssuedPlanTask) {
+      return task<T>({ kind: 'issued-plan', task: t });
     },
 
     async close() {

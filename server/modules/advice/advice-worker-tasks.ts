@@ -12,6 +12,7 @@ import { diffPlans } from '../plans/plan-diff';
 import { loadStandTrees } from '../plans/plans.repository';
 import type { TrendResult } from '../trends/stand-trends';
 import { computeTrends } from '../trends/trends-task';
+import { runIssuedPlanTask, type IssuedPlanTask } from '../issued-plans/issued-plan-tasks';
 import { trendsRepository } from '../trends/trends.repository';
 import { adviceRepository, type PlanFilter } from './advice.repository';
 import { adviseAndStore } from './advise-and-store';
@@ -40,6 +41,8 @@ export type AdviceTask =
   | (OnStand & { kind: 'compliance'; guidelines: GuidelineChoice[] })
   /** Seasons with a measurement or a taphole of the stand on record. */
   | (Omit<OnStand, 'season'> & { kind: 'recorded-seasons' })
+  /** Issuing a plan, and what reads the issued copy against the whole stand. */
+  | { kind: 'issued-plan'; database: DatabaseTarget; task: IssuedPlanTask }
   /** The stand's figures season by season from its record and each season's stored advice. */
   | (Omit<OnStand, 'season'> & {
       kind: 'trends';
@@ -72,8 +75,17 @@ function dbFor(target: DatabaseTarget): Knex {
 
 export async function runAdviceTask(
   task: AdviceTask,
-): Promise<number[] | number | PlanTotals | GuidelinePreview | EvaluatedTree[] | TrendResult> {
+): Promise<
+  | number[]
+  | number
+  | PlanTotals
+  | GuidelinePreview
+  | EvaluatedTree[]
+  | TrendResult
+  | Awaited<ReturnType<typeof runIssuedPlanTask>>
+> {
   const db = dbFor(task.database);
+  if (task.kind === 'issued-plan') return runIssuedPlanTask(db, task.task);
   if (task.kind === 'recorded-seasons')
     return trendsRepository(db).recordedSeasons(task.sugarbushId);
   if (task.kind === 'trends')

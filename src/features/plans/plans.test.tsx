@@ -212,13 +212,13 @@ describe('the season plan', () => {
     await waitFor(() => expect(lastPlanRequest(api).get('share')).toBeNull());
   });
 
-  it('prints the field sheet with the browser', async () => {
-    const print = vi.fn();
-    vi.stubGlobal('print', print);
-    const { user } = openPlan();
+  it('leads to the field sheet of every tree through the plan’s filters, not its page', async () => {
+    openPlan({}, 'metric', '/sugarbushes/3/plan?season=2026&verdict=rest&page=3');
     await screen.findByRole('table', { name: 'Season plan' });
-    await user.click(screen.getByRole('button', { name: 'Print field sheet' }));
-    expect(print).toHaveBeenCalledOnce();
+    expect(screen.getByRole('link', { name: 'Print field sheet' })).toHaveAttribute(
+      'href',
+      '/sugarbushes/3/plan/field-sheet?season=2026&verdict=rest',
+    );
   });
 });
 

@@ -2,7 +2,6 @@ import type { ReactNode } from 'react';
 import { AdviceProgress } from '@/components/advice-progress';
 import { SeasonStepper } from '@/components/season-stepper';
 import { TreeListEmpty } from '@/components/tree-list-empty';
-import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
 import { PageHeader } from '@/components/ui/page-header';
@@ -13,7 +12,10 @@ import { WhyDisclosure } from '@/components/ui/why-disclosure';
 import { nextSort, toTableSort } from '@/lib/list-search-params';
 import { formatNumber, useUnitSystem } from '@/lib/units';
 import { useSeasonPlan } from '../api/get-season-plan';
+import { FieldSheetLink } from './field-sheet-link';
+import { IssuePanel } from './issue-panel';
 import { PlanFilterBar } from './plan-filters';
+import { SeasonProgressBar } from './season-progress';
 import { usePlanSearchParams } from './plan-search-params';
 import { PlanTotalsStrip, PlanWarningSummary } from './plan-totals';
 import { SeasonPlanTable } from './season-plan-table';
@@ -55,9 +57,7 @@ export function SeasonPlan({
         <div className="flex flex-wrap items-center gap-3">
           <SeasonStepper season={filters.season} onChange={(season) => update({ season })} />
           <UnitToggle />
-          <Button className="print:hidden" onClick={() => window.print()}>
-            Print field sheet
-          </Button>
+          <FieldSheetLink sugarbushId={sugarbushId} filters={filters} />
         </div>
       }
     />
@@ -124,6 +124,8 @@ export function SeasonPlan({
   return (
     <>
       {header}
+      <SeasonProgressBar sugarbushId={sugarbushId} season={filters.season} />
+      <IssuePanel key={filters.season} sugarbushId={sugarbushId} season={filters.season} />
       <GuidelineNotice notice={data.profile.notice} />
       {data.profile.seasonRules.length > 0 && (
         <section aria-labelledby="season-rules-heading" className="mb-4">
