@@ -16,7 +16,7 @@ interface Props {
   system: UnitSystem;
   /** Names the tree in the diagram's accessible name. */
   tag?: string;
-  /** Show the text list open (beside the drawing on a desktop); else it opens on request. */
+  /** Show the text list under the drawing open; else it opens on request. */
   listOpen?: boolean;
 }
 
@@ -96,8 +96,8 @@ export function TrunkDiagram({
   let advisedNo = 0;
 
   return (
-    <figure className="flex flex-col gap-3 md:flex-row md:items-start">
-      <div className="min-w-0 md:flex-1">
+    <figure className="flex flex-col gap-3">
+      <div className="min-w-0">
         <svg
           viewBox={`0 0 ${W} ${H}`}
           role="img"
@@ -255,7 +255,7 @@ export function TrunkDiagram({
           </span>
         </p>
       </div>
-      <details open={listOpen} className="md:w-72">
+      <details open={listOpen}>
         <summary className="flex min-h-11 cursor-pointer items-center text-sm font-bold md:min-h-8">
           Holes on this trunk, as a list ({marks.length})
         </summary>
