@@ -8,11 +8,7 @@ import { readTrunkHoles } from './trunk-holes';
  * What a tree's trunk diagram and a drilled-hole check read, when the tree is opened: its advice
  * for the season (spots, drill, growth), every hole on record, and the stand's guideline rules.
  */
-export function useTreeDrilling(
-  treeId: number,
-  sugarbushId: number | undefined,
-  season: number,
-) {
+export function useTreeDrilling(treeId: number, sugarbushId: number | undefined, season: number) {
   const advice = useTreeAdvice(treeId, season);
   const tapholes = useTapholes(treeId);
   const stand = useSugarbush(sugarbushId);
