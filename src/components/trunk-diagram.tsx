@@ -1,7 +1,6 @@
-import { compassWord, formatHeight } from '@/lib/advice-words';
-import { formatNumber, type UnitSystem } from '@/lib/units';
-import { trunkSummary, type TrunkMark } from '@/lib/trunk-holes';
-import { cmToIn } from '@/lib/units';
+import { markWords, trunkSummary, type TrunkMark } from '@/lib/trunk-holes';
+import { cmToIn, formatNumber, type UnitSystem } from '@/lib/units';
+import { TrunkLegend } from './trunk-legend';
 
 interface Props {
   marks: readonly TrunkMark[];
@@ -39,19 +38,6 @@ function heightTicks(lo: number, hi: number, system: UnitSystem): number[] {
 
 const tickLabel = (cm: number, system: UnitSystem) =>
   system === 'imperial' ? `${Math.round(cmToIn(cm) / 12)} ft` : `${formatNumber(cm / 100, 2)} m`;
-
-/** "south-west (225°) at 1.05 m". */
-export const markSpot = (m: Pick<TrunkMark, 'azimuthDeg' | 'heightCm'>, system: UnitSystem) =>
-  `${compassWord(m.azimuthDeg)} (${Math.round(m.azimuthDeg) % 360}°) at ${formatHeight(m.heightCm, system)}`;
-
-/** What the text list says of one mark. */
-export function markWords(m: TrunkMark, system: UnitSystem): string {
-  const spot = markSpot(m, system);
-  if (m.kind === 'advised') return `Advised spot: ${spot}`;
-  if (m.kind === 'this-season') return `${m.season}, drilled this season: ${spot}`;
-  if (!m.inReach) return `${m.season}: ${spot}, grown over, out of reach of new holes`;
-  return `${m.season}: ${spot}, ${formatNumber(m.stainLeft * 100)} % of its stain still in reach`;
-}
 
 /**
  * The trunk's bark unrolled: compass bearing left to right from north round to north, height up
@@ -227,33 +213,7 @@ export function TrunkDiagram({
             );
           })}
         </svg>
-        <p className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-sm text-bark">
-          {has('advised') && (
-            <span className="inline-flex items-center gap-1">
-              <span
-                aria-hidden="true"
-                className="inline-block size-3 rounded-full border-[3px] border-sap bg-paper"
-              />
-              Advised spot
-            </span>
-          )}
-          {has('this-season') && (
-            <span className="inline-flex items-center gap-1">
-              <span aria-hidden="true" className="inline-block size-3 rounded-full bg-moss" />
-              Drilled in {season}
-            </span>
-          )}
-          {has('earlier') && (
-            <span className="inline-flex items-center gap-1">
-              <span aria-hidden="true" className="inline-block h-3 w-2 bg-bark/50" />
-              Earlier hole and its stain, fading as the tree grows over it
-            </span>
-          )}
-          <span className="inline-flex items-center gap-1">
-            <span aria-hidden="true" className="inline-block h-3 w-4 bg-frost ring-1 ring-rule" />
-            Tapping band
-          </span>
-        </p>
+        <TrunkLegend has={has} season={season} />
       </div>
       <details open={listOpen}>
         <summary className="flex min-h-11 cursor-pointer items-center text-sm font-bold md:min-h-8">

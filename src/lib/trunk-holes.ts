@@ -1,3 +1,5 @@
+import { compassWord, formatHeight } from './advice-words';
+import { formatNumber, type UnitSystem } from './units';
 import {
   normalizeAzimuth,
   stainLeftInReach,
@@ -92,4 +94,17 @@ export function trunkSummary(marks: readonly TrunkMark[], season: number): strin
   if (drilled > 0) parts.push(`${drilled} drilled in ${season}`);
   parts.push(advised === 0 ? 'no advised spots' : count(advised, 'advised spot', 'advised spots'));
   return `${parts.join('; ')}.`;
+}
+
+/** "south-west (225°) at 1.05 m". */
+export const markSpot = (m: Pick<TrunkMark, 'azimuthDeg' | 'heightCm'>, system: UnitSystem) =>
+  `${compassWord(m.azimuthDeg)} (${Math.round(m.azimuthDeg) % 360}°) at ${formatHeight(m.heightCm, system)}`;
+
+/** What the text list says of one mark. */
+export function markWords(m: TrunkMark, system: UnitSystem): string {
+  const spot = markSpot(m, system);
+  if (m.kind === 'advised') return `Advised spot: ${spot}`;
+  if (m.kind === 'this-season') return `${m.season}, drilled this season: ${spot}`;
+  if (!m.inReach) return `${m.season}: ${spot}, grown over, out of reach of new holes`;
+  return `${m.season}: ${spot}, ${formatNumber(m.stainLeft * 100)} % of its stain still in reach`;
 }

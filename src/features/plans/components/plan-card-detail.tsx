@@ -1,8 +1,9 @@
-import { TrunkDiagram, markSpot } from '@/components/trunk-diagram';
+import { TrunkDiagram } from '@/components/trunk-diagram';
 import { ErrorState } from '@/components/ui/error-state';
 import { Skeleton } from '@/components/ui/skeleton';
 import { useTreeDrilling } from '@/lib/use-tree-drilling';
 import type { UnitSystem } from '@/lib/units';
+import { markSpot } from '@/lib/trunk-holes';
 import { DrilledHoleForm } from './drilled-hole-form';
 
 /**
