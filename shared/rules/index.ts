@@ -73,6 +73,7 @@ export {
 export {
   conductiveShare,
   holesInReach,
+  stainLeftInReach,
   steadyStateShare,
   minimumSustainableGrowth,
   minimumSustainableRadialGrowth,

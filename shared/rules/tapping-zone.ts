@@ -60,6 +60,28 @@ export function holesInReach<H extends ZoneHole>(
   return holes.filter((h) => h.season < options.season && g * (options.season - h.season) < depth);
 }
 
+/**
+ * How much of a hole's stain a new hole of this depth can still reach in `season`, 0–1: all of
+ * it the season it was drilled, less each season as growth lays clear wood over it (1 − g·k/d),
+ * none once it is out of reach. Of earlier seasons' holes, those above 0 are `holesInReach`.
+ */
+export function stainLeftInReach(
+  hole: ZoneHole,
+  options: {
+    season: number;
+    depthCm: number;
+    radialGrowthCmPerYear: number;
+    zone?: Partial<ZoneParams>;
+  },
+): number {
+  const age = options.season - hole.season;
+  if (age < 0) return 0;
+  const depth = woodDepthCm(options.depthCm, zoneParams(options.zone));
+  if (!(depth > 0)) return 0;
+  const g = Math.max(0, options.radialGrowthCmPerYear);
+  return clamp01(1 - (g * age) / depth);
+}
+
 /** π(R² − (R − d)²) · H with R = DBH / 2. */
 export function zoneVolumeCm3(dbhCm: number, woodDepth: number, zone: ZoneParams): number {
   const r = dbhCm / 2;

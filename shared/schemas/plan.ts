@@ -22,8 +22,14 @@ export const adviceQuerySchema = z.object({ season: season.optional() });
 export const planQuerySchema = listQuerySchema.extend({
   season: season.optional(),
   sort: z
-    .enum(['tag', '-tag', 'taps', '-taps', 'dbh', '-dbh', 'share', '-share', 'verdict'])
+    .enum(['tag', '-tag', 'taps', '-taps', 'dbh', '-dbh', 'share', '-share', 'verdict', 'walk'])
     .optional(),
+  /**
+   * Where a walking order (`sort=walk`) starts: where the tapper stands. Without both, the walk
+   * starts at the stand's first tree by tag.
+   */
+  fromLat: z.coerce.number().min(-90).max(90).optional(),
+  fromLng: z.coerce.number().min(-180).max(180).optional(),
   verdict: z.string().max(20).optional(),
   warning: z.string().max(30).optional(),
   /** Trees big enough to tap whose conductive share lies in one band (`shareBands`). */

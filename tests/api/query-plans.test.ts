@@ -115,6 +115,8 @@ describeOnSqlite('query plans of the hot reads', () => {
       '&sort=share',
       '&sort=dbh',
       '&sort=verdict',
+      '&sort=walk',
+      '&sort=walk&fromLat=45.5&fromLng=-72.1',
       '&verdict=tap',
       '&warning=slow-growth',
       '&share=90-95',

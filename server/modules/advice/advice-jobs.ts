@@ -6,7 +6,7 @@ import { AppError } from '../../errors';
 import type { Logger } from '../../lib/logger';
 import type { AdviceStatus } from '../../../shared/schemas/advice-status';
 import type { PlanTotals } from '../../../shared/rules/index';
-import { adviceRepository, type PlanFilter } from './advice.repository';
+import { adviceRepository, type PlanFilter, type WalkStart } from './advice.repository';
 import type { GuidelinePreview } from '../../../shared/schemas/guideline-preview';
 import type { EvaluatedTree, GuidelineChoice } from '../compliance/compliance-task';
 import type { TrendResult } from '../trends/stand-trends';
@@ -34,7 +34,7 @@ export interface AdviceJobs {
     sugarbushId: number,
     season: number,
     standVersion: number,
-    filter: PlanFilter & { sort?: string },
+    filter: PlanFilter & { sort?: string; from?: WalkStart | null },
   ): Promise<number[]>;
   /** What another guideline would change against the stored plan, worked out in a worker. */
   preview(

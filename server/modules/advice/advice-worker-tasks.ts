@@ -14,7 +14,7 @@ import type { TrendResult } from '../trends/stand-trends';
 import { computeTrends } from '../trends/trends-task';
 import { runIssuedPlanTask, type IssuedPlanTask } from '../issued-plans/issued-plan-tasks';
 import { trendsRepository } from '../trends/trends.repository';
-import { adviceRepository, type PlanFilter } from './advice.repository';
+import { adviceRepository, type PlanFilter, type WalkStart } from './advice.repository';
 import { adviseAndStore } from './advise-and-store';
 import { profileOf, standGuideline } from './stand-guideline';
 
@@ -34,7 +34,11 @@ export type AdviceTask =
   /** The season's totals over the stand's current rows. */
   | (OnStand & { kind: 'totals'; standVersion: number })
   /** The ids of the current rows matching a filter, in a sort's order. */
-  | (OnStand & { kind: 'order'; standVersion: number; filter: PlanFilter & { sort?: string } })
+  | (OnStand & {
+      kind: 'order';
+      standVersion: number;
+      filter: PlanFilter & { sort?: string; from?: WalkStart | null };
+    })
   /** The stored plan against every tree under another guideline, which is not stored. */
   | (OnStand & { kind: 'preview'; standVersion: number; guideline: PreviewGuideline })
   /** Every tree tapped in the season, held against each guideline (not stored). */

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { warningCodes, type PlanTotals, type WarningCode } from '../../../shared/rules/index';
+import { walkingOrder } from '../../../shared/geo/walking-order';
 import { shareBands, sharedVerdicts } from '../../../shared/schemas/share-bands';
 import { adviceColumns, warningBit, type AdviceRow } from './advice-rows';
 
@@ -25,7 +26,13 @@ export interface PlanFilter {
   share?: string;
 }
 
-export type PlanSortKey = 'tag' | 'taps' | 'dbh' | 'share' | 'verdict';
+export type PlanSortKey = 'tag' | 'taps' | 'dbh' | 'share' | 'verdict' | 'walk';
+
+/** Where a walking order starts (where the tapper stands); the stand's first tree without it. */
+export interface WalkStart {
+  lat: number;
+  lng: number;
+}
 
 export function adviceRepository(db: Knex) {
   /**
@@ -154,11 +161,18 @@ export function adviceRepository(db: Knex) {
       sugarbushId: number,
       season: number,
       standVersion: number,
-      opts: PlanFilter & { sort?: string },
+      opts: PlanFilter & { sort?: string; from?: WalkStart | null },
     ): Promise<number[]> {
       const base = filtered(sugarbushId, season, standVersion, opts);
       if (!base) return [];
       const key = (opts.sort ?? 'tag').replace(/^-/, '') as PlanSortKey;
+      if (key === 'walk') {
+        // The matching trees by tag, then the nearest-neighbour walk through them.
+        const placed: { id: number; lat: number | null; lng: number | null }[] = await base
+          .orderBy('t.tag')
+          .select('t.id', 't.lat', 't.lng');
+        return walkingOrder(placed, opts.from).map((r) => Number(r.id));
+      }
       const dir = opts.sort?.startsWith('-') ? 'desc' : 'asc';
       const rows: { id: number }[] = await base
         .modify((q) => {

@@ -33,6 +33,16 @@ const summary = (p: GuidelineProfile, notice: string | null): ProfileSummary => 
   notice,
 });
 
+/**
+ * Where a walk starts, to about 10 m (four decimals of a degree): finer is noise in a phone's
+ * fix, and each start is an order kept of its own.
+ */
+function walkStart(q: PlanQuery) {
+  if (q.fromLat === undefined || q.fromLng === undefined) return null;
+  const round = (deg: number) => Math.round(deg * 1e4) / 1e4;
+  return { lat: round(q.fromLat), lng: round(q.fromLng) };
+}
+
 export function plansService(ctx: AppContext) {
   const store = adviceRepository(ctx.db);
   const notes = notesRepository(ctx.db);
@@ -92,7 +102,14 @@ export function plansService(ctx: AppContext) {
       ]);
       return { items, total: totals.trees };
     }
-    const filter = { q: q.q, verdict: q.verdict, warning: q.warning, share: q.share, sort: q.sort };
+    const filter = {
+      q: q.q,
+      verdict: q.verdict,
+      warning: q.warning,
+      share: q.share,
+      sort: q.sort,
+      ...(sortKey === 'walk' && { from: walkStart(q) }),
+    };
     const key = `${stamp}:${season}:${version}:order:${JSON.stringify(filter)}`;
     const ids = await keep(key, () => ctx.advice.orderedIds(sugarbushId, season, version, filter));
     const pageIds = ids.slice(offset, offset + q.pageSize);

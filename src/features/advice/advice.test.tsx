@@ -108,16 +108,21 @@ describe('the advice card', () => {
     ).toBeInTheDocument();
   });
 
-  it('draws the trunk with a text alternative naming earlier holes and the numbered new ones', async () => {
-    openAdvice('metric');
-    const diagram = await screen.findByRole('img', { name: /Trunk diagram/ });
+  it('draws the trunk with every earlier hole from the record and the advised spots, summed up in its name and listed as text', async () => {
+    openAdvice('metric', {
+      'GET /api/trees/7/tapholes': page([
+        taphole({ id: 1, season: 2026, azimuthDeg: 225, heightCm: 70 }),
+        taphole({ id: 2, season: 2026, azimuthDeg: 60, heightCm: 120 }),
+      ]),
+    });
+    const diagram = await screen.findByRole('img', { name: /Trunk of tree 0412/ });
     expect(diagram).toHaveAccessibleName(
-      expect.stringContaining(
-        'Earlier holes still in reach: south-west at 0.70 m (2026); north-east at 1.20 m (2026).',
-      ),
+      'Trunk of tree 0412, unrolled from north round to north: 2 earlier holes, 2 still in reach of new holes; 2 advised spots.',
     );
-    expect(diagram).toHaveAccessibleName(
-      expect.stringContaining('New holes: 1, south at 1.10 m; 2, north at 0.80 m.'),
+    const list = screen.getByRole('list', { name: 'Holes on this trunk' });
+    expect(list).toHaveTextContent('Advised spot: south (180°) at 1.10 m');
+    expect(list).toHaveTextContent(
+      '2026: south-west (225°) at 0.70 m, 94 % of its stain still in reach',
     );
   });
 
@@ -199,7 +204,7 @@ describe('the advice card', () => {
       await screen.findByText('Rest this tree in 2027: drill no new holes.'),
     ).toBeInTheDocument();
     expect(screen.queryByText(/Drill with a/)).toBeNull();
-    expect(screen.queryByRole('img', { name: /Trunk diagram/ })).toBeNull();
+    expect(screen.queryByRole('img', { name: /Trunk of tree/ })).toBeNull();
   });
 
   it('when the advice fails to load, then Retry asks again', async () => {

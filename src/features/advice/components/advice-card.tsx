@@ -3,6 +3,7 @@ import { useSearchParams } from 'react-router';
 import type { Spot } from '@shared/rules/index';
 import type { TreeAdvice } from '@shared/schemas/plan';
 import { SeasonStepper } from '@/components/season-stepper';
+import { TrunkDiagram } from '@/components/trunk-diagram';
 import { Button } from '@/components/ui/button';
 import { ErrorState } from '@/components/ui/error-state';
 import { GuidelineNotice, RuleList } from '@/components/ui/guideline-rules';
@@ -10,13 +11,14 @@ import { Skeleton } from '@/components/ui/skeleton';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
 import { VerdictBadge } from '@/components/verdict-badge';
 import { adviceSentence, drillWords, spotWords } from '@/lib/advice-words';
+import { useTree } from '@/lib/get-tree';
 import { useTreeAdvice } from '@/lib/get-tree-advice';
+import { useTreeDrilling } from '@/lib/use-tree-drilling';
 import { parseSeason, seasonParam } from '@/lib/season';
 import { useUnitSystem } from '@/lib/units';
 import { AdviceFigures } from './advice-figures';
 import { LongRun } from './long-run';
 import { ShareProjectionChart } from './share-projection-chart';
-import { TrunkDiagram } from './trunk-diagram';
 import { WarningList } from './warning-list';
 
 /** The season shown is kept in the URL (`?season=`), so a link from the plan opens the same one. */
@@ -108,9 +110,11 @@ function AdviceBody({
   onUseSpot?: (spot: AdvisedSpot) => void;
 }) {
   const { system } = useUnitSystem();
-  // The holes the advisor spaced the new ones from; not sent when the advice is a plan row.
-  const inReach = advice.holesInReach ?? [];
-  const drawTrunk = advice.taps > 0 || inReach.length > 0;
+  // The tree's every hole, faded by the growth over it, beside the spots advised.
+  const sugarbushId = useTree(advice.treeId).data?.sugarbushId;
+  const drilling = useTreeDrilling(advice.treeId, sugarbushId, advice.season);
+  const earlier = drilling.marks?.some((m) => m.kind !== 'advised') ?? false;
+  const drawTrunk = advice.taps > 0 || earlier;
 
   return (
     <div aria-busy={stale || undefined} className="flex flex-col gap-4">
@@ -173,15 +177,22 @@ function AdviceBody({
         </section>
       )}
 
-      {drawTrunk && (
+      {drawTrunk && drilling.marks && (
         <TrunkDiagram
-          placements={advice.placements}
-          priorHoles={inReach}
-          priorHolesUnknown={advice.holesInReach === undefined}
+          marks={drilling.marks}
+          season={advice.season}
           heightBand={advice.profile.heightBand}
+          dbhCm={advice.dbhCm}
           stainLengthCm={advice.profile.stainLengthCm}
+          stainMarginCm={advice.profile.stainMarginCm}
           system={system}
+          tag={advice.tag}
         />
+      )}
+      {drawTrunk && drilling.isError && (
+        <p className="text-sm text-alert">
+          The tree's earlier holes could not be loaded, so the trunk is not drawn.
+        </p>
       )}
 
       <WarningList warnings={advice.warnings} />

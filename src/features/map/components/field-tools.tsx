@@ -1,6 +1,6 @@
 import { Button } from '@/components/ui/button';
 import { formatNumber, type UnitSystem } from '@/lib/units';
-import type { Position } from '../lib/use-geolocation';
+import type { Position } from '@/lib/use-geolocation';
 
 interface FieldToolsProps {
   canEdit: boolean;

@@ -5,7 +5,7 @@ import { AttributionControl, MapContainer, ScaleControl } from 'react-leaflet';
 import type { Boundary } from '@shared/schemas/sugarbush';
 import { colors } from '@/lib/theme';
 import type { MappedTree } from '../lib/map-stand';
-import type { Position } from '../lib/use-geolocation';
+import type { Position } from '@/lib/use-geolocation';
 import { BackgroundLayer, MAX_MAP_ZOOM, type Background } from './background-layer';
 import { BoundaryLayer } from './boundary-layer';
 import { BackgroundClick, FocusController, PickPoint, type FocusRequest } from './map-events';

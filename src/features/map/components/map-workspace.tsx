@@ -9,7 +9,7 @@ import { initialView } from '../lib/initial-view';
 import { countLegend } from '../lib/legend-counts';
 import { findByTag, hasFilters, stepFrom, visibleTrees } from '../lib/map-filters';
 import { isMapped, type MapStand } from '../lib/map-stand';
-import { useGeolocation } from '../lib/use-geolocation';
+import { useGeolocation } from '@/lib/use-geolocation';
 import { useMapParams } from '../lib/use-map-params';
 import { AddTreeForm } from './add-tree-form';
 import { MapBackgrounds, useBackground } from './map-backgrounds';
@@ -61,7 +61,7 @@ export function MapWorkspace({ sugarbushId, data, sugarbush }: MapWorkspaceProps
   const [editingBoundary, setEditingBoundary] = useState(false);
   const [picking, setPicking] = useState(false);
   const [addAt, setAddAt] = useState<LatLng | null>(null);
-  const geo = useGeolocation();
+  const geo = useGeolocation('Add the tree by clicking the map instead.');
   const move = useTreeMove(sugarbushId);
   const region = useRef<HTMLDivElement>(null);
   const mapBox = useRef<HTMLDivElement>(null);

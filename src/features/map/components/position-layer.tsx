@@ -2,7 +2,7 @@ import L from 'leaflet';
 import { useEffect } from 'react';
 import { useMap } from 'react-leaflet';
 import { colors } from '@/lib/theme';
-import type { Position } from '../lib/use-geolocation';
+import type { Position } from '@/lib/use-geolocation';
 import type { LatLng } from './move-marker';
 
 /** Where the device is: a dot, and a circle as wide as the fix is uncertain. */

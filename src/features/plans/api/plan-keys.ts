@@ -16,6 +16,9 @@ export interface PlanFilters {
   warning?: WarningCode;
   /** A conductive-share band: trees big enough to tap whose share lies in it. */
   share?: ShareBandKey;
+  /** Where a walking order (`sort: 'walk'`) starts: where the tapper stands. */
+  fromLat?: number;
+  fromLng?: number;
 }
 
 export const planKeys = {

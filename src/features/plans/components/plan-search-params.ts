@@ -4,8 +4,13 @@ import { bothWays, oneOf, parseListParams, useListSearchParams } from '@/lib/lis
 import { parseSeason, seasonParam } from '@/lib/season';
 import { PLAN_PAGE_SIZE } from '../api/get-season-plan';
 import type { PlanFilters, PlanSort } from '../api/plan-keys';
+import { walkStartParams } from './walk-start';
 
-const sorts: readonly PlanSort[] = [...bothWays(['tag', 'taps', 'dbh', 'share']), 'verdict'];
+const sorts: readonly PlanSort[] = [
+  ...bothWays(['tag', 'taps', 'dbh', 'share']),
+  'verdict',
+  'walk',
+];
 const verdictKeys = verdicts.map((v) => v.key);
 
 const parsePlanParams = (params: URLSearchParams): PlanFilters => ({
@@ -14,6 +19,7 @@ const parsePlanParams = (params: URLSearchParams): PlanFilters => ({
   verdict: oneOf<VerdictKey>(verdictKeys, params.get('verdict')),
   warning: oneOf<WarningCode>(warningCodes, params.get('warning')),
   share: oneOf<ShareBandKey>(shareBandKeys, params.get('share')),
+  ...walkStartParams(params),
 });
 
 /** The upcoming season is the default, so it stays out of the URL. */

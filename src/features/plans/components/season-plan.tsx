@@ -9,16 +9,19 @@ import { Pager, pageRange } from '@/components/ui/pager';
 import { Skeleton, TableSkeleton } from '@/components/ui/skeleton';
 import { UnitToggle } from '@/components/ui/unit-toggle';
 import { WhyDisclosure } from '@/components/ui/why-disclosure';
+import { can, useRole } from '@/lib/auth';
 import { nextSort, toTableSort } from '@/lib/list-search-params';
 import { formatNumber, useUnitSystem } from '@/lib/units';
 import { useSeasonPlan } from '../api/get-season-plan';
 import { FieldSheetLink } from './field-sheet-link';
 import { IssuePanel } from './issue-panel';
+import { PlanCards } from './plan-cards';
 import { PlanFilterBar } from './plan-filters';
 import { SeasonProgressBar } from './season-progress';
 import { usePlanSearchParams } from './plan-search-params';
 import { PlanTotalsStrip, PlanWarningSummary } from './plan-totals';
 import { SeasonPlanTable } from './season-plan-table';
+import { useWalkedPlan } from './walk-start';
 
 /**
  * The season's plan for a whole stand: totals, then tree by tree how many taps and where.
@@ -33,8 +36,11 @@ export function SeasonPlan({
   standName: string | undefined;
   caution?: ReactNode;
 }) {
-  const { filters, update } = usePlanSearchParams();
+  const { filters: chosen, update } = usePlanSearchParams();
+  // A phone shows cards, walked in order unless another order was picked.
+  const { filters, cards } = useWalkedPlan(chosen);
   const { system } = useUnitSystem();
+  const canRecord = can(useRole(sugarbushId), 'record-tapholes');
   const plan = useSeasonPlan(sugarbushId, filters);
   const filtered = Boolean(filters.q || filters.verdict || filters.warning || filters.share);
   const data = plan.data;
@@ -109,14 +115,27 @@ export function SeasonPlan({
           Field sheet · {standName} · season {filters.season} · rows {formatNumber(first)}–
           {formatNumber(last)} of {formatNumber(total)}
         </p>
-        <SeasonPlanTable
-          items={items}
-          season={filters.season}
-          system={system}
-          sort={toTableSort(filters.sort)}
-          onSort={(field) => update({ sort: nextSort(filters.sort, field) })}
-          stale={plan.isPlaceholderData}
-        />
+        {cards ? (
+          <PlanCards
+            items={items}
+            season={filters.season}
+            system={system}
+            sugarbushId={sugarbushId}
+            canRecord={canRecord}
+            filters={filters}
+            onChange={update}
+            stale={plan.isPlaceholderData}
+          />
+        ) : (
+          <SeasonPlanTable
+            items={items}
+            season={filters.season}
+            system={system}
+            sort={toTableSort(filters.sort)}
+            onSort={(field) => update({ sort: nextSort(filters.sort, field) })}
+            stale={plan.isPlaceholderData}
+          />
+        )}
         <Pager label="Plan pages" list={data} onPage={(page) => update({ page })} />
       </>
     );

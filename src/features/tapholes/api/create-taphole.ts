@@ -3,7 +3,7 @@ import { tapholeInputSchema, type Taphole, type TapholeInput } from '@shared/sch
 import { api } from '@/lib/api-client';
 import { queryRoots } from '@/lib/query-roots';
 import { treeDetailKeys } from '@/lib/tree-detail-keys';
-import { tapholeKeys } from './taphole-keys';
+import { tapholeKeys } from '@/lib/taphole-keys';
 
 export { tapholeInputSchema as createTapholeInputSchema };
 

@@ -1,7 +1,7 @@
 import type { Spacing } from '@shared/rules/index';
 import { compassWord, formatHeight } from '@/lib/advice-words';
 import { formatLength, lengthUnitOf, type UnitSystem } from '@/lib/units';
-import type { CrowdedHole } from '../lib/spacing-check';
+import type { CrowdedHole } from '@/lib/spacing-check';
 
 function gap(cm: number, system: UnitSystem): string {
   const unit = lengthUnitOf(system);

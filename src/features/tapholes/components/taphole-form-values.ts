@@ -2,14 +2,12 @@ import { normalizeAzimuth } from '@shared/rules/index';
 import type { Collection } from '@shared/schemas/enums';
 import { tapholeInputSchema, type TapholeInput } from '@shared/schemas/taphole';
 import { formatBitSize } from '@/lib/advice-words';
+import { bitSizes, matchBit } from '@/lib/bit-sizes';
 import { nearestPoint, pointDeg, type CompassPoint } from '@/lib/compass';
 import { cmToIn, inToCm, parseDecimal, roundTo, type UnitSystem } from '@/lib/units';
 
-/** The bits the trade sells, in cm to the last digit the fraction has (7/16 in = 1.11125 cm). */
-export const bitSizes = [5 / 16, 19 / 64, 7 / 16].map((inches) => roundTo(inToCm(inches), 7));
+export { bitSizes, matchBit };
 export const bitLabel = (cm: number, system: UnitSystem) => formatBitSize(cm, system);
-/** The offered bit this width matches, within rounding. */
-export const matchBit = (cm: number) => bitSizes.find((b) => Math.abs(b - cm) < 1e-4);
 
 /**
  * The form as typed. Lengths are text in `system`'s units. Fields left undefined follow the

@@ -4,7 +4,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { TableSkeleton } from '@/components/ui/skeleton';
 import { formatBit, formatDate, formatLength, useUnitSystem, type LengthUnit } from '@/lib/units';
-import { useTapholes } from '../api/get-tapholes';
+import { useTapholes } from '@/lib/get-tapholes';
 import { collectionLabels } from '@/lib/collection-labels';
 
 const compass = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];

@@ -4,8 +4,8 @@ import type { Taphole } from '@shared/schemas/taphole';
 import { useSugarbush } from '@/lib/get-sugarbush';
 import { useTreeAdvice } from '@/lib/get-tree-advice';
 import { parseSeason } from '@/lib/season';
-import { useTapholes } from '../api/get-tapholes';
-import { crowdedHoles, spacingRulesFor, type CrowdedHole } from '../lib/spacing-check';
+import { useTapholes } from '@/lib/get-tapholes';
+import { crowdedHoles, spacingRulesFor, type CrowdedHole } from '@/lib/spacing-check';
 import {
   bitSizes,
   matchBit,

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/list-query';
 import type { Taphole } from '@shared/schemas/taphole';
-import { api } from '@/lib/api-client';
+import { api } from './api-client';
 import { tapholeKeys } from './taphole-keys';
 
 export const getTapholes = (treeId: number, signal?: AbortSignal) =>

@@ -68,3 +68,33 @@ export function crowdedHoles(
         b.hole.season - a.hole.season,
     );
 }
+
+/** What the advisor says of a hole as it is entered, before it is saved. */
+export interface DrilledHoleCheck {
+  /** Holes it comes too close to, nearest first. */
+  crowded: CrowdedHole[];
+  /** It would be this season's hole number … */
+  holeNumber: number;
+  /** … of this many the advice gives the tree; over when `holeNumber` is larger. */
+  advisedTaps: number;
+  over: boolean;
+}
+
+/**
+ * A hole being entered, checked the way the advisor checks a plan: spacing and stain against
+ * the season's holes and the earlier holes still in reach (`crowdedHoles`), and its count
+ * against the taps the season's advice gives the tree.
+ */
+export function checkDrilledHole(
+  spot: Spot,
+  holes: readonly Taphole[],
+  options: Parameters<typeof crowdedHoles>[2] & { advisedTaps: number },
+): DrilledHoleCheck {
+  const holeNumber = holes.filter((h) => h.season === options.season).length + 1;
+  return {
+    crowded: crowdedHoles(spot, holes, options),
+    holeNumber,
+    advisedTaps: options.advisedTaps,
+    over: holeNumber > options.advisedTaps,
+  };
+}

@@ -10,7 +10,7 @@ export interface Position {
 export function geolocationMessage(code: number | 'unsupported'): string {
   switch (code) {
     case 'unsupported':
-      return "This browser can't tell where you are. Add the tree by clicking the map instead.";
+      return "This browser can't tell where you are.";
     case 1:
       return "Location is blocked for Clearwood. Allow it in your browser's site settings, then try again.";
     case 3:
@@ -25,8 +25,11 @@ type State =
   | { status: 'found'; position: Position }
   | { status: 'failed'; position: Position | null; message: string };
 
-/** One position fix at a time, on request; the last good one is kept while a new one is sought. */
-export function useGeolocation() {
+/**
+ * One position fix at a time, on request; the last good one is kept while a new one is sought.
+ * `unsupportedHint` says what to do instead on a device that cannot tell where it is.
+ */
+export function useGeolocation(unsupportedHint?: string) {
   const [state, setState] = useState<State>({ status: 'idle', position: null });
 
   const locate = useCallback(
@@ -37,7 +40,7 @@ export function useGeolocation() {
           setState((s) => ({
             status: 'failed',
             position: s.position,
-            message: geolocationMessage('unsupported'),
+            message: [geolocationMessage('unsupported'), unsupportedHint].filter(Boolean).join(' '),
           }));
           resolve(null);
           return;
@@ -64,7 +67,7 @@ export function useGeolocation() {
           { enableHighAccuracy: true, timeout: 20_000, maximumAge: 10_000 },
         );
       }),
-    [],
+    [unsupportedHint],
   );
 
   return { ...state, locate };

@@ -1,4 +1,4 @@
-import { queryRoots } from '@/lib/query-roots';
+import { queryRoots } from './query-roots';
 
 export const tapholeKeys = {
   all: queryRoots.tapholes,
