@@ -11,6 +11,8 @@ import type { GuidelinePreview } from '../../../shared/schemas/guideline-preview
 import type { EvaluatedTree, GuidelineChoice } from '../compliance/compliance-task';
 import type { TrendResult } from '../trends/stand-trends';
 import type { AdviceTask, PreviewGuideline } from './advice-worker-tasks';
+import type { ReadRows } from '../imports/read-rows';
+import type { ImportKind, ImportMapping } from '../../../shared/schemas/imports';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
 const CHUNK = 500;
@@ -56,6 +58,8 @@ export interface AdviceJobs {
     seasons: { season: number; standVersion: number }[],
     upcoming: number,
   ): Promise<TrendResult>;
+  /** A CSV file read and checked row by row in a worker (`server/modules/imports/read-rows.ts`). */
+  readImport(of: ImportKind, bytes: Uint8Array, mapping: ImportMapping): Promise<ReadRows>;
   close(): Promise<void>;
 }
 
@@ -203,6 +207,10 @@ export function createAdviceJobs(opts: {
 
     trends(sugarbushId, seasons, upcoming) {
       return task<TrendResult>({ kind: 'trends', sugarbushId, seasons, upcoming });
+    },
+
+    readImport(of, bytes, mapping) {
+      return task<ReadRows>({ kind: 'read-import', of, bytes, mapping });
     },
 
     async close() {

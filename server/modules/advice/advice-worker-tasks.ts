@@ -8,6 +8,8 @@ import {
   type EvaluatedTree,
   type GuidelineChoice,
 } from '../compliance/compliance-task';
+import { readRows, type ReadRows } from '../imports/read-rows';
+import type { ImportKind, ImportMapping } from '../../../shared/schemas/imports';
 import { diffPlans } from '../plans/plan-diff';
 import { loadStandTrees } from '../plans/plans.repository';
 import type { TrendResult } from '../trends/stand-trends';
@@ -38,6 +40,14 @@ export type AdviceTask =
   | (OnStand & { kind: 'preview'; standVersion: number; guideline: PreviewGuideline })
   /** Every tree tapped in the season, held against each guideline (not stored). */
   | (OnStand & { kind: 'compliance'; guidelines: GuidelineChoice[] })
+  /** A CSV file read into checked rows (no database). */
+  | {
+      kind: 'read-import';
+      database: DatabaseTarget;
+      of: ImportKind;
+      bytes: Uint8Array;
+      mapping: ImportMapping;
+    }
   /** Seasons with a measurement or a taphole of the stand on record. */
   | (Omit<OnStand, 'season'> & { kind: 'recorded-seasons' })
   /** The stand's figures season by season from its record and each season's stored advice. */
@@ -72,7 +82,10 @@ function dbFor(target: DatabaseTarget): Knex {
 
 export async function runAdviceTask(
   task: AdviceTask,
-): Promise<number[] | number | PlanTotals | GuidelinePreview | EvaluatedTree[] | TrendResult> {
+): Promise<
+  number[] | number | PlanTotals | GuidelinePreview | EvaluatedTree[] | TrendResult | ReadRows
+> {
+  if (task.kind === 'read-import') return readRows(task.of, task.bytes, task.mapping);
   const db = dbFor(task.database);
   if (task.kind === 'recorded-seasons')
     return trendsRepository(db).recordedSeasons(task.sugarbushId);
