@@ -136,6 +136,15 @@ describe('reading spreadsheet files', () => {
     expect(row).toMatchObject({ lat: 45.1234, lng: -72.5 });
   });
 
+  it('when a file is not UTF-8 but an older spreadsheet encoding, then its accented letters are kept', async () => {
+    const text = Buffer.from('tag,species\nÉ-1,sugar-maple\n', 'latin1');
+    const res = await upload(forester, team.standId, 'trees', text);
+    expect(res.status).toBe(201);
+    expect(
+      await t.db('trees').where({ sugarbush_id: team.standId, tag: 'É-1' }).first(),
+    ).toBeTruthy();
+  });
+
   it('when a note holds a quoted newline, then it stays in one row and later rows keep their spreadsheet number', async () => {
     await addTree(t.db, team.standId, 'Q-1');
     await addTree(t.db, team.standId, 'Q-2');

@@ -33,9 +33,21 @@ export function detectDelimiter(text: string): string {
   return best;
 }
 
-/** Read a CSV file: UTF-8, with or without a byte-order mark; blank rows keep their number. */
+/**
+ * UTF-8, as every current spreadsheet writes it; a file that is not valid UTF-8 is read as
+ * Windows-1252, which older spreadsheet versions write for "CSV", so `Érable` survives either way.
+ */
+function decode(bytes: Uint8Array): string {
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    return new TextDecoder('windows-1252').decode(bytes);
+  }
+}
+
+/** Read a CSV file, with or without a byte-order mark; blank rows keep their number. */
 export function readCsv(bytes: Uint8Array): CsvTable {
-  const text = new TextDecoder('utf-8').decode(bytes).replace(/^\uFEFF/, '');
+  const text = decode(bytes).replace(/^\uFEFF/, '');
   let rows: string[][];
   try {
     rows = parse(text, {
