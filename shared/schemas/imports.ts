@@ -134,4 +134,9 @@ export interface ImportResult {
   /** Empty when every row could be taken; when not, nothing was written. */
   errors: ImportRowError[];
   columns: ImportColumn[];
+  /** The first data rows as read, cell by cell in the file's column order (for a preview). */
+  preview: string[][];
 }
+
+/** Data rows a report shows as they were read. */
+export const PREVIEW_ROWS = 5;

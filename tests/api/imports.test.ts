@@ -95,6 +95,10 @@ describe('importing the register from CSV', () => {
       { header: 'tag', field: 'tag' },
       { header: 'species', field: 'species' },
     ]);
+    expect(res.body.preview).toEqual([
+      ['D-1', 'red-maple'],
+      ['D-2', 'Sugar maple'],
+    ]);
     expect(await treeCount(team.standId)).toBe(before);
   });
 

@@ -66,6 +66,7 @@ export function importsService(ctx: AppContext) {
         updated: 0,
         errors: read.errors,
         columns: read.columns,
+        preview: read.preview,
       };
       if (read.errors.length > 0 && read.records.length === 0) return result;
       const { sugarbushId, userId } = access;

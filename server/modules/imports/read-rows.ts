@@ -2,6 +2,7 @@ import type { ZodType } from 'zod';
 import { dbhFromCircumference } from '../../../shared/rules/index';
 import { collections, species, speciesLabels, treeStatuses } from '../../../shared/schemas/enums';
 import {
+  PREVIEW_ROWS,
   unitOf,
   type ImportColumn,
   type ImportField,
@@ -45,6 +46,7 @@ export type ImportRow = TreeRow | MeasurementRow | TapholeRow;
 
 export interface ReadRows<R extends ImportRow = ImportRow> {
   columns: ImportColumn[];
+  preview: string[][];
   /** Data rows read, blank rows left out. */
   rows: number;
   /** Valid rows, each once: a row repeating an earlier one of the file is counted in `repeats`. */
@@ -93,9 +95,14 @@ const schemaOf: Record<ImportKind, ZodType> = {
  */
 export function readRows(kind: ImportKind, bytes: Uint8Array, mapping: ImportMapping): ReadRows {
   const table = readCsv(bytes);
-  if (table.error) return { columns: [], rows: 0, records: [], repeats: 0, errors: [table.error] };
+  if (table.error)
+    return { columns: [], preview: [], rows: 0, records: [], repeats: 0, errors: [table.error] };
   const { columns, index, errors } = resolveColumns(kind, table.header, mapping);
-  const out: ReadRows = { columns, rows: 0, records: [], repeats: 0, errors };
+  const preview = table.records
+    .filter((r) => r.cells.some((c) => c !== ''))
+    .slice(0, PREVIEW_ROWS)
+    .map((r) => r.cells.map((c) => c.slice(0, 200)));
+  const out: ReadRows = { columns, preview, rows: 0, records: [], repeats: 0, errors };
   if (errors.length > 0) {
     out.rows = table.records.filter((r) => r.cells.some((c) => c !== '')).length;
     return out;
