@@ -45,6 +45,37 @@ export const importFields = {
 } as const satisfies Record<ImportKind, readonly string[]>;
 export type ImportField = (typeof importFields)[ImportKind][number];
 
+/** What each field is, in the words an import page shows (the unit is part of the choice). */
+export const importFieldLabels: Record<ImportField, string> = {
+  tag: 'Tag',
+  species: 'Species',
+  lat: 'Latitude',
+  lng: 'Longitude',
+  status: 'Status',
+  measuredOn: 'Date measured (YYYY-MM-DD)',
+  dbhCm: 'DBH in centimetres',
+  dbhIn: 'DBH in inches',
+  circumferenceCm: 'Circumference in centimetres',
+  circumferenceIn: 'Circumference in inches',
+  crownDiebackPct: 'Crown dieback (%)',
+  note: 'Note',
+  season: 'Season',
+  heightCm: 'Height in centimetres',
+  heightIn: 'Height in inches',
+  azimuthDeg: 'Side (azimuth, degrees from north)',
+  depthCm: 'Depth in centimetres',
+  depthIn: 'Depth in inches',
+  bitCm: 'Bit in centimetres',
+  bitIn: 'Bit in inches',
+  collection: 'Collection (bucket, gravity, vacuum)',
+};
+
+export const importKindLabels: Record<ImportKind, string> = {
+  trees: 'Trees (the register)',
+  measurements: 'Readings (DBH and crown dieback)',
+  tapholes: 'Tapholes',
+};
+
 /** The header of each kind as exported (and so as an export imports again). */
 export const exportHeaders = {
   trees: ['tag', 'species', 'lat', 'lng', 'status'],
@@ -97,6 +128,14 @@ export const importMappingSchema = z.preprocess(
   }),
 );
 export type ImportMapping = z.infer<typeof importMappingSchema>;
+
+/** The import page's form: the kind of file and the mapping it sends with it. */
+export const importFormSchema = z.object({
+  kind: z.enum(importKinds),
+  columns: columnsSchema,
+  updateExisting: z.boolean(),
+});
+export type ImportForm = z.infer<typeof importFormSchema>;
 
 const flag = z
   .enum(['1', '0', 'true', 'false'])
