@@ -21,6 +21,8 @@ import { useImportFile } from '../api/import-file';
 import { ColumnMapping } from './column-mapping';
 import { ImportReport } from './import-report';
 
+const rowsLabel = (n: number) => `${n} ${n === 1 ? 'row' : 'rows'}`;
+
 /** The kinds of file this role may import. */
 export const importableKinds = (role: Role | undefined): ImportKind[] =>
   importKinds.filter((k) => can(role, importPermission[k]));
@@ -114,6 +116,7 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
           error={form.formState.errors.kind?.message}
         />
         <Field
+          className="w-full min-w-0 md:w-auto"
           label="CSV file"
           hint="A spreadsheet's CSV export: comma, semicolon or tab separated."
         >
@@ -122,7 +125,7 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
               {...control}
               type="file"
               accept=".csv,.txt,text/csv"
-              className={controlClass}
+              className={`${controlClass} w-full min-w-0`}
               onChange={(e) => {
                 const chosen = e.target.files?.[0] ?? null;
                 startOver({ file: chosen });
@@ -190,7 +193,7 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
           onClick={form.handleSubmit((values) => run(false, values))}
         >
           {report && report.errors.length === 0
-            ? `Import ${report.created + report.updated} rows`
+            ? `Import ${rowsLabel(report.created + report.updated)}`
             : 'Import'}
         </Button>
       </div>

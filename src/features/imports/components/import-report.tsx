@@ -18,7 +18,8 @@ export function ImportReport({ report, stale }: { report: ImportResult; stale: b
         </p>
       )}
       <p>
-        {formatNumber(report.rows)} rows read: {formatNumber(report.created)} new
+        {formatNumber(report.rows)} {report.rows === 1 ? 'row' : 'rows'} read:{' '}
+        {formatNumber(report.created)} new
         {report.updated > 0 ? `, ${formatNumber(report.updated)} to update` : ''},{' '}
         {formatNumber(report.unchanged)} already on record.
       </p>
