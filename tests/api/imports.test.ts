@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { addTree, makeTestApp, signIn, standWithTeam } from './test-app';
+import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
@@ -31,6 +31,13 @@ function upload(
     .set('x-csrf-token', who.csrf);
   if (opts.mapping !== undefined) req.field('mapping', JSON.stringify(opts.mapping));
   return req.attach('file', Buffer.isBuffer(text) ? text : Buffer.from(text, 'utf8'), 'file.csv');
+}
+
+/** Trees written straight into the register, their advice brought up to date. */
+async function addTrees(...tags: string[]) {
+  const ids = [];
+  for (const tag of tags) ids.push(await addTree(t.db, team.standId, tag));
+  await recordsWritten(t.db, team.standId, ids);
 }
 
 const treeCount = async (standId: number) =>
@@ -150,8 +157,7 @@ describe('reading spreadsheet files', () => {
   });
 
   it('when a note holds a quoted newline, then it stays in one row and later rows keep their spreadsheet number', async () => {
-    await addTree(t.db, team.standId, 'Q-1');
-    await addTree(t.db, team.standId, 'Q-2');
+    await addTrees('Q-1', 'Q-2');
     const text =
       'tag\tmeasuredOn\tdbhCm\tcrownDiebackPct\tnote\n' +
       'Q-1\t2025-10-01\t31,5\t10\t"split bark,\nlow on the north side"\n' +
@@ -177,8 +183,7 @@ describe('reading spreadsheet files', () => {
   });
 
   it('when numbers carry unit suffixes, then the column unit is kept and a contradicting one is an error', async () => {
-    await addTree(t.db, team.standId, 'N-1');
-    await addTree(t.db, team.standId, 'N-2');
+    await addTrees('N-1', 'N-2');
     const bad = await upload(
       forester,
       team.standId,
@@ -224,6 +229,31 @@ describe('reading spreadsheet files', () => {
   });
 });
 
+describe('text that a spreadsheet would run', () => {
+  it('when a note starts like a formula, then the export marks it as text and the import takes it back unchanged', async () => {
+    const id = await addTree(t.db, team.standId, 'F-1');
+    await t.db('measurements').insert({
+      tree_id: id,
+      measured_on: '2025-10-05',
+      season: 2025,
+      dbh_cm: 40,
+      note: '=HYPERLINK("x")',
+    });
+    await recordsWritten(t.db, team.standId, [id]);
+    const res = await owner.agent.get(`/api/sugarbushes/${team.standId}/export/measurements.csv`);
+    expect(res.status).toBe(200);
+    const line = res.text.split('\n').find((l) => l.startsWith('F-1,'));
+    expect(line).toBe(`F-1,2025-10-05,40,,"'=HYPERLINK(""x"")"`);
+    const again = await upload(
+      owner,
+      team.standId,
+      'measurements',
+      `tag,measuredOn,dbhCm,crownDiebackPct,note\n${line}\n`,
+    );
+    expect(again.body).toMatchObject({ created: 0, unchanged: 1, errors: [] });
+  });
+});
+
 describe('who may import', () => {
   it('when a tapper imports trees or measurements, then it is refused with 403', async () => {
     const trees = await upload(tapper, team.standId, 'trees', 'tag,species\nZ-1,sugar-maple\n');
@@ -232,7 +262,7 @@ describe('who may import', () => {
   });
 
   it('when a forester imports tapholes, then it is refused with 403; a tapper may', async () => {
-    await addTree(t.db, team.standId, 'H-1');
+    await addTrees('H-1');
     const text =
       'tag,season,heightCm,azimuthDeg,depthCm,bitCm,collection\nH-1,2025,90,180,5,0.8,vacuum\n';
     expect((await upload(forester, team.standId, 'tapholes', text)).status).toBe(403);

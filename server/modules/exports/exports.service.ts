@@ -23,6 +23,13 @@ async function put(out: Writable, chunk: string | Cell[]) {
   if (!out.write(chunk)) await once(out, 'drain');
 }
 
+/**
+ * Text a spreadsheet would run as a formula (`=`, `+`, `-`, `@` first) goes out behind a `'`, as
+ * spreadsheets themselves mark text; the import takes the mark off again.
+ */
+export const asText = (value: string | null): Cell =>
+  value !== null && /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+
 const num = (v: unknown): Cell => (v === null || v === undefined ? null : Number(v));
 
 /** The rows a kind exports for one page of trees, in the order of the import header. */
@@ -40,7 +47,7 @@ async function rowsOf(
     kind === 'measurements'
       ? (await repo.measurementsOf(ids)).map((m) => ({
           treeId: Number(m.tree_id),
-          cells: [m.measured_on, num(m.dbh_cm), num(m.crown_dieback_pct), m.note ?? null],
+          cells: [m.measured_on, num(m.dbh_cm), num(m.crown_dieback_pct), asText(m.note ?? null)],
         }))
       : (await repo.tapholesOf(ids)).map((h) => ({
           treeId: Number(h.tree_id),
@@ -55,7 +62,7 @@ async function rowsOf(
         }));
   // Tree by tree in tag order; within a tree, as the query sorted them (a stable sort).
   rows.sort((a, b) => order.get(a.treeId)! - order.get(b.treeId)!);
-  return rows.map((r) => [tagOf.get(r.treeId)!, ...r.cells] as Cell[]);
+  return rows.map((r) => [asText(tagOf.get(r.treeId)!), ...r.cells] as Cell[]);
 }
 
 export function exportsService(ctx: AppContext) {

@@ -66,6 +66,9 @@ const numberKind: Partial<Record<ImportField, NumberKind>> = {
   azimuthDeg: 'deg',
 };
 
+/** A `'` a spreadsheet (or our export) puts before text that would read as a formula. */
+const fromText = (cell: string) => (/^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell);
+
 /** Lengths converted from another unit keep 0.1 mm, well below what a tape reads. */
 const round2 = (n: number) => Math.round(n * 100) / 100;
 
@@ -145,7 +148,8 @@ export function readRows(kind: ImportKind, bytes: Uint8Array, mapping: ImportMap
       } else if (field === 'species') value = choice(cell, species, speciesLabels);
       else if (field === 'status') value = cell === '' ? undefined : choice(cell, treeStatuses);
       else if (field === 'collection') value = choice(cell, collections);
-      else if (field === 'note') value = cell === '' ? null : cell;
+      else if (field === 'note') value = cell === '' ? null : fromText(cell);
+      else if (field === 'tag') value = fromText(cell);
       else value = cell;
       values[key] = value;
     }
