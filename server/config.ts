@@ -96,6 +96,12 @@ const envSchema = z.object({
     .int()
     .min(1)
     .default(10 * 1024 * 1024),
+  /** Largest CSV import, in bytes; 20 MiB by default (some 300,000 rows). */
+  IMPORT_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(20 * 1024 * 1024),
   PHOTO_S3_BUCKET: unsetWhenEmpty(s3Bucket),
   PHOTO_S3_REGION: unsetWhenEmpty(
     z.string().regex(/^[a-z]{2}(-[a-z0-9]+)+$|^auto$/, 'must be a region name such as eu-west-1'),

@@ -6,6 +6,8 @@ import { auditRoutes } from './modules/audit/audit.routes';
 import { basemapsRoutes } from './modules/basemaps/basemaps.routes';
 import { complianceRoutes } from './modules/compliance/compliance.routes';
 import { issuedPlansRoutes } from './modules/issued-plans/issued-plans.routes';
+import { exportsRoutes } from './modules/exports/exports.routes';
+import { importsRoutes } from './modules/imports/imports.routes';
 import { invitationsRoutes } from './modules/invitations/invitations.routes';
 import { membersRoutes } from './modules/members/members.routes';
 import { mapRoutes } from './modules/map/map.routes';
@@ -38,5 +40,7 @@ export function apiRoutes(ctx: AppContext) {
   router.use(basemapsRoutes(ctx));
   router.use(membersRoutes(ctx));
   router.use(invitationsRoutes(ctx));
+  router.use(importsRoutes(ctx));
+  router.use(exportsRoutes(ctx));
   return router;
 }

@@ -87,6 +87,11 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               }),
             },
             {
+              path: paths.imports.path,
+              handle: handle('trees'),
+              lazy: async () => ({ Component: (await import('./routes/imports')).ImportsRoute }),
+            },
+            {
               path: paths.tree.path,
               handle: handle('trees'),
               lazy: async () => ({ Component: (await import('./routes/tree')).TreeRoute }),

@@ -44,6 +44,8 @@ export const paths = {
   /** A signed-in person with no stand yet starts one here. */
   newSugarbush: { path: '/sugarbushes/new', href: () => '/sugarbushes/new' },
   trees: sugarbushSection('trees'),
+  /** CSV imports of trees, readings and tapholes. */
+  imports: sugarbushSection('imports'),
   tree: {
     path: '/trees/:treeId',
     href: (treeId: Id, search?: SearchInit) =>

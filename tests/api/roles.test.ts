@@ -272,6 +272,43 @@ const cases: RouteCase[] = [
     allowed: everyone,
   },
   {
+    name: 'import trees from CSV',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/imports/trees`,
+    upload: () => ({ bytes: Buffer.from(`tag,species\nI-${++n},red-maple\n`), filename: 't.csv' }),
+    allowed: ['owner', 'forester'],
+  },
+  {
+    name: 'check readings from CSV (dry run)',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/imports/measurements?dryRun=1`,
+    upload: () => ({
+      bytes: Buffer.from('tag,measuredOn,dbhCm\nT-001,2025-10-01,30\n'),
+      filename: 'm.csv',
+    }),
+    allowed: ['owner', 'forester'],
+    okStatus: 200,
+  },
+  {
+    name: 'check tapholes from CSV (dry run)',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/imports/tapholes?dryRun=1`,
+    upload: () => ({
+      bytes: Buffer.from(
+        'tag,season,heightCm,azimuthDeg,depthCm,bitCm,collection\nT-001,2025,90,10,5,0.8,bucket\n',
+      ),
+      filename: 'h.csv',
+    }),
+    allowed: ['owner', 'tapper'],
+    okStatus: 200,
+  },
+  {
+    name: 'export the register',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/export.csv`,
+    allowed: everyone,
+  },
+  {
     name: 'add a photo to a tree',
     method: 'post',
     path: (i) => `/api/trees/${i.treeId}/photos`,

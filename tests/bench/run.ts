@@ -15,6 +15,7 @@ import type { Browser } from 'playwright-core';
 import { upcomingSeason } from '../../shared/schemas/plan';
 import { launchBrowser } from '../e2e/harness';
 import { bundleFigures, ensureClientBuilt, type BundleFigures } from './bundle';
+import { importBench, IMPORT_ROWS } from './import-bench';
 import { busyWindow, machineInfo, pct } from './machine';
 import { measureMap } from './map-draw';
 import { readStand, standSettings, timePlanStand } from './plan-floor';
@@ -148,6 +149,16 @@ async function benchStand(trees: number, browser: Browser | null): Promise<Stand
       );
       return d;
     });
+    const imports = await attempt(`a ${IMPORT_ROWS}-row CSV import`, async () => {
+      const f = await importBench(s, cached.standId, {
+        cached: cached.file,
+        scratch: path.join(dir, 'floor.sqlite'),
+      });
+      console.log(
+        `  CSV import of ${f.rows} trees ${f.importMs.toFixed(0)} ms (bare insert ${f.floorMs.toFixed(0)} ms); trivial route meanwhile p99 ${f.trivial.p99.toFixed(1)} ms`,
+      );
+      return f;
+    });
     return {
       trees,
       label,
@@ -171,6 +182,7 @@ async function benchStand(trees: number, browser: Browser | null): Promise<Stand
       measurements,
       guideline,
       during,
+      imports,
       errors,
     };
   } finally {

@@ -12,6 +12,8 @@ import type { EvaluatedTree, GuidelineChoice } from '../compliance/compliance-ta
 import type { TrendResult } from '../trends/stand-trends';
 import type { AdviceTask, PreviewGuideline } from './advice-worker-tasks';
 import type { IssuedPlanTask } from '../issued-plans/issued-plan-tasks';
+import type { ReadRows } from '../imports/read-rows';
+import type { ImportKind, ImportMapping } from '../../../shared/schemas/imports';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
 const CHUNK = 500;
@@ -59,6 +61,8 @@ export interface AdviceJobs {
   ): Promise<TrendResult>;
   /** Issuing a plan and reading the issued copy against the stand, in a worker. */
   issuedPlan<T>(task: IssuedPlanTask): Promise<T>;
+  /** A CSV file read and checked row by row in a worker (`server/modules/imports/read-rows.ts`). */
+  readImport(of: ImportKind, bytes: Uint8Array, mapping: ImportMapping): Promise<ReadRows>;
   close(): Promise<void>;
 }
 
@@ -210,6 +214,10 @@ export function createAdviceJobs(opts: {
 
     issuedPlan<T>(t: IssuedPlanTask) {
       return task<T>({ kind: 'issued-plan', task: t });
+    },
+
+    readImport(of, bytes, mapping) {
+      return task<ReadRows>({ kind: 'read-import', of, bytes, mapping });
     },
 
     async close() {
