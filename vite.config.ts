@@ -33,6 +33,8 @@ const serviceWorker = VitePWA({
     navigateFallback: 'index.html',
     navigateFallbackDenylist: [/^\/api\//, /^\/tiles\//],
     cleanupOutdatedCaches: true,
+    // The first visit is served by the worker at once; a later build still waits (no skipWaiting).
+    clientsClaim: true,
   },
 });
 

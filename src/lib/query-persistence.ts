@@ -49,7 +49,8 @@ const shouldDehydrateMutation = (m: Mutation) => isFieldEntry(m) && m.state.stat
 /**
  * A small IndexedDB persister (idb-keyval) that keeps the queue apart from the cache: a new build
  * drops the cached reads (their shapes may have changed) but never an entry waiting to be sent.
- * Writes follow the caches' changes, at most one every 200 ms.
+ * Writes follow the query cache's changes, at most one every 200 ms, and every change of an entry
+ * at once.
  */
 function devicePersister(queryClient: QueryClient, build: string) {
   let timer: ReturnType<typeof setTimeout> | null = null;
@@ -62,6 +63,11 @@ function devicePersister(queryClient: QueryClient, build: string) {
   return {
     schedule: () => {
       timer ??= setTimeout(() => void write().catch(() => undefined), 200);
+    },
+    /** An entry recorded, sent or refused is written at once: a reload may follow right away. */
+    now: () => {
+      if (timer) clearTimeout(timer);
+      void write().catch((e) => console.warn('clearwood: could not keep the cache', e));
     },
     /**
      * What was kept, ready for `hydrate`. Entries come back paused, so `resumePausedMutations()`
@@ -105,9 +111,8 @@ export async function restoreDeviceCache(queryClient: QueryClient): Promise<void
   } catch {
     // A store that cannot be read (private mode, quota) leaves the app working online.
   }
-  const schedule = persister.schedule;
-  queryClient.getQueryCache().subscribe(schedule);
-  queryClient.getMutationCache().subscribe(schedule);
+  queryClient.getQueryCache().subscribe(persister.schedule);
+  queryClient.getMutationCache().subscribe(persister.now);
   void queryClient.resumePausedMutations();
 }
 

@@ -29,7 +29,7 @@ export function FieldEntryStatus() {
         <div className="rounded border-l-4 border-alert bg-alert/5 px-3 py-2">
           <div className="flex flex-wrap items-center gap-3">
             <p className="font-bold">{entries(refused.length)} not accepted</p>
-            <Button className="md:min-h-11" aria-expanded={open} onClick={() => setOpen((o) => !o)}>
+            <Button field aria-expanded={open} onClick={() => setOpen((o) => !o)}>
               {open ? 'Hide' : 'Review'}
             </Button>
           </div>
@@ -39,7 +39,7 @@ export function FieldEntryStatus() {
       {updateWaiting && (
         <div className="flex flex-wrap items-center gap-3 rounded bg-frost px-3 py-2">
           <p>A new version of Clearwood is ready.</p>
-          <Button className="md:min-h-11" onClick={appUpdate.apply}>
+          <Button field onClick={appUpdate.apply}>
             Reload now
           </Button>
         </div>

@@ -44,10 +44,10 @@ function RefusedItem({ refused }: { refused: RefusedEntry }) {
         <div role="group" aria-label="Discard the entry" className="mt-2">
           <p>Discard this entry? It was never stored and will be gone from this device.</p>
           <div className="mt-2 flex flex-wrap gap-3">
-            <Button className="md:min-h-11" onClick={() => refusedEntries.remove(entry.clientId)}>
+            <Button field onClick={() => refusedEntries.remove(entry.clientId)}>
               Discard it
             </Button>
-            <Button className="md:min-h-11" onClick={() => setConfirmDiscard(false)}>
+            <Button field onClick={() => setConfirmDiscard(false)}>
               Keep it
             </Button>
           </div>
@@ -55,18 +55,15 @@ function RefusedItem({ refused }: { refused: RefusedEntry }) {
       ) : (
         <div className="mt-2 flex flex-wrap gap-3">
           {entry.kind === 'measurement' ? (
-            <Button className="md:min-h-11" onClick={() => setEditing(true)}>
+            <Button field onClick={() => setEditing(true)}>
               Edit and send again
             </Button>
           ) : (
-            <Button
-              className="md:min-h-11"
-              onClick={() => resend({ ...entry, clientId: newClientId() })}
-            >
+            <Button field onClick={() => resend({ ...entry, clientId: newClientId() })}>
               Send again
             </Button>
           )}
-          <Button className="md:min-h-11" onClick={() => setConfirmDiscard(true)}>
+          <Button field onClick={() => setConfirmDiscard(true)}>
             Discard…
           </Button>
         </div>

@@ -108,10 +108,10 @@ export function RefusedMeasurementForm({
       )}
       {formError && <p className="text-sm text-alert">{formError}</p>}
       <div className="flex flex-wrap gap-3">
-        <Button type="submit" variant="primary" className="md:min-h-11">
+        <Button type="submit" variant="primary" field>
           Send again
         </Button>
-        <Button onClick={onCancel} className="md:min-h-11">
+        <Button onClick={onCancel} field>
           Cancel
         </Button>
       </div>

@@ -18,10 +18,10 @@ export function SignOutButton(props: Pick<ButtonProps, 'variant' | 'block' | 'cl
           Signing out deletes {lost(unsent)} from this device. Connect and let them send first, or
           sign out anyway.
         </p>
-        <Button variant="primary" block onClick={cancel} className="md:min-h-11">
+        <Button variant="primary" block onClick={cancel} field>
           Stay signed in
         </Button>
-        <Button block onClick={confirm} disabled={pending} className="md:min-h-11">
+        <Button block onClick={confirm} disabled={pending} field>
           Sign out and lose {unsent}
         </Button>
       </div>
