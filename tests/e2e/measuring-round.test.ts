@@ -138,6 +138,18 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     await page.getByText('Signing out deletes 2 entries that are not on the server').waitFor();
     await page.getByRole('button', { name: 'Stay signed in' }).click();
     await context.setOffline(false);
+    await expect.poll(() => page.getByText(/waiting to send/).count(), { timeout: 15000 }).toBe(0);
+
+    // Signing out anyway forgets the refused entry: the next person on this phone sees none of it.
+    // (The panel with the sign-out button is still open.)
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByText('Signing out deletes 1 entry that is not on the server').waitFor();
+    await page.getByRole('button', { name: 'Sign out and lose 1' }).click();
+    await page.waitForURL(/\/sign-in/);
+    await signInAs(page, env.server.url, 'owner@fernside.example');
+    await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
+    await page.locator('main h1').waitFor();
+    expect(await page.getByText(/not accepted|waiting to send/).count()).toBe(0);
     expect(offSite(hosts)).toEqual([]);
     await context.close();
   });

@@ -3,6 +3,7 @@ import { useEffect, useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router';
 import type { MeasurementInput } from '@shared/schemas/measurement';
 import { Button } from '@/components/ui/button';
+import { CautionBox } from '@/components/ui/caution-box';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { TableSkeleton } from '@/components/ui/skeleton';
@@ -183,6 +184,14 @@ export function MeasuringRound({ sugarbushId }: { sugarbushId: number }) {
           </ul>
         </section>
       )}
+
+      <CautionBox title="In the woods">
+        <p>
+          Watch your footing on ice, wet rock and slopes, and look up before you stand under a tree
+          with heavy dieback: dead limbs fall without warning. Tell someone where you walk and when
+          you expect to be back. Local rules and your employer&apos;s safety plan come first.
+        </p>
+      </CautionBox>
 
       <section aria-labelledby="round-start" className="border-t border-rule pt-4">
         <h2 id="round-start" className="text-lg font-bold">
