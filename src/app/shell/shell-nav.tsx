@@ -32,8 +32,11 @@ export function useSignOut() {
   const run = () =>
     logout.mutate(undefined, {
       onSettled: async () => {
-        await clearDeviceCache(queryClient);
-        window.location.assign(paths.signIn.href());
+        try {
+          await clearDeviceCache(queryClient);
+        } finally {
+          window.location.assign(paths.signIn.href());
+        }
       },
     });
   return {

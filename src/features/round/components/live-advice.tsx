@@ -14,7 +14,12 @@ export function LiveAdvice({
 }: {
   record: TreeRecordAnswer | undefined;
   round: Round;
-  reading: { measuredOn: string; dbhCm: number; crownDiebackPct: number | null } | null;
+  reading: {
+    measuredOn: string;
+    dbhCm: number;
+    crownDiebackPct: number | null;
+    confirmedOutlier: boolean;
+  } | null;
 }) {
   if (!record)
     return (

@@ -31,6 +31,8 @@ function typedReading(values: MeasurementFormValues) {
     measuredOn: values.measuredOn,
     dbhCm: dbhCmFrom(typed, values.unit, values.mode),
     crownDiebackPct: values.crownDiebackPct === '' ? null : Number(values.crownDiebackPct),
+    // Once confirmed, a reading far off the trend counts in the advice, as it will on the server.
+    confirmedOutlier: values.confirmedOutlier,
   };
 }
 
