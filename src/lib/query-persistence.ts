@@ -1,6 +1,7 @@
 import {
   dehydrate,
   hydrate,
+  onlineManager,
   type DehydratedState,
   type Mutation,
   type Query,
@@ -113,6 +114,10 @@ export async function restoreDeviceCache(queryClient: QueryClient): Promise<void
   }
   queryClient.getQueryCache().subscribe(persister.schedule);
   queryClient.getMutationCache().subscribe(persister.now);
+  // TanStack Query takes the network as there until told otherwise: opened offline, the entries
+  // wait (paused) for the "online" event instead of failing their way through retries.
+  if (typeof navigator !== 'undefined' && navigator.onLine === false)
+    onlineManager.setOnline(false);
   void queryClient.resumePausedMutations();
 }
 

@@ -90,6 +90,7 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     await page.reload();
     await page.locator('#round-tree').waitFor({ timeout: 20000 });
     await page.getByText('2 waiting to send').waitFor();
+    await page.getByText(/You.re offline/).waitFor();
     expect(await page.evaluate(() => navigator.serviceWorker.controller !== null)).toBe(true);
     await page.getByText(`5 of ${due.toLocaleString('en-US')} measured in ${season}`).waitFor();
     for (const t of offline) expect(await readingsThisSeason(t.treeId)).toHaveLength(0);
