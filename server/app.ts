@@ -75,7 +75,9 @@ export function createApp(opts: AppOptions) {
           'script-src-attr': ["'none'"],
           // Leaflet and the charts position elements with inline style attributes.
           'style-src': ["'self'", "'unsafe-inline'"],
+          // The service worker (sw.js) and the map's workers; the app's manifest.
           'worker-src': ["'self'", 'blob:'],
+          'manifest-src': ["'self'"],
           ...(config.COOKIE_SECURE ? { 'upgrade-insecure-requests': [] } : {}),
         },
       },
@@ -153,7 +155,18 @@ export function createApp(opts: AppOptions) {
 
   const clientDir = opts.clientDir === undefined ? path.join(root, 'dist') : opts.clientDir;
   if (clientDir && fs.existsSync(path.join(clientDir, 'index.html'))) {
-    app.use(express.static(clientDir, { index: false, maxAge: production ? '1h' : 0 }));
+    app.use(
+      express.static(clientDir, {
+        index: false,
+        maxAge: production ? '1h' : 0,
+        // The service worker, its manifest and the shell are asked for afresh, so a new build is
+        // found on the next visit; the hashed assets they name may be cached.
+        setHeaders: (res, file) => {
+          if (/(^|[\\/])(sw\.js|manifest\.webmanifest|index\.html)$/.test(file))
+            res.setHeader('Cache-Control', 'no-cache');
+        },
+      }),
+    );
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
   }
 

@@ -15,6 +15,7 @@ import { measurementsRoutes } from './modules/measurements/measurements.routes';
 import { notesRoutes } from './modules/notes/notes.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
 import { plansRoutes } from './modules/plans/plans.routes';
+import { roundRoutes } from './modules/round/round.routes';
 import { sugarbushesRoutes } from './modules/sugarbushes/sugarbushes.routes';
 import { tapholesRoutes } from './modules/tapholes/tapholes.routes';
 import { treesRoutes } from './modules/trees/trees.routes';
@@ -34,6 +35,7 @@ export function apiRoutes(ctx: AppContext) {
   router.use(issuedPlansRoutes(ctx));
   router.use(adviceRoutes(ctx));
   router.use(mapRoutes(ctx));
+  router.use(roundRoutes(ctx));
   router.use(trendsRoutes(ctx));
   router.use(complianceRoutes(ctx));
   router.use(auditRoutes(ctx));

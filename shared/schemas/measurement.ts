@@ -58,5 +58,7 @@ export interface Measurement {
   /** True when a later row corrects this one. */
   superseded: boolean;
   recordedBy: number | null;
+  /** The id the recording device gave the entry, when it sent one. */
+  clientId: string | null;
   createdAt: string;
 }

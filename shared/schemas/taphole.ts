@@ -22,8 +22,10 @@ export const tapholeInputSchema = z.object({
 });
 export type TapholeInput = z.infer<typeof tapholeInputSchema>;
 
-export interface Taphole extends TapholeInput {
+export interface Taphole extends Omit<TapholeInput, 'clientId'> {
   id: number;
+  /** The id the recording device gave the entry, when it sent one. */
+  clientId: string | null;
   treeId: number;
   recordedBy: number | null;
   createdAt: string;

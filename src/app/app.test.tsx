@@ -95,8 +95,8 @@ describe('the app shell', () => {
   }, 20000);
 
   it('when a section is not built yet, then it says so calmly', async () => {
-    openApp('/sugarbushes/3/round', asRole('forester'));
-    expect(await screen.findByRole('heading', { name: 'Measuring round' })).toBeInTheDocument();
+    openApp('/sugarbushes/3/season', asRole('tapper'));
+    expect(await screen.findByRole('heading', { name: 'Season log' })).toBeInTheDocument();
     expect(screen.getByText('Coming soon in Clearwood')).toBeInTheDocument();
   });
 

@@ -7,7 +7,7 @@ import { RouteError } from './route-error';
 import { AppShell } from './shell/app-shell';
 import type { SectionHandle } from './shell/sections';
 
-const planned: SectionKey[] = ['round', 'season'];
+const planned: SectionKey[] = ['season'];
 
 const handle = (section: SectionKey): SectionHandle => ({ section });
 
@@ -95,6 +95,13 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               path: paths.tree.path,
               handle: handle('trees'),
               lazy: async () => ({ Component: (await import('./routes/tree')).TreeRoute }),
+            },
+            {
+              path: paths.round.path,
+              handle: handle('round'),
+              lazy: async () => ({
+                Component: (await import('./routes/measuring-round')).MeasuringRoundRoute,
+              }),
             },
             {
               path: paths.plan.path,

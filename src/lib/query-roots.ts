@@ -9,6 +9,8 @@ export const queryRoots = {
   trees: ['trees'],
   plans: ['plans'],
   map: ['map'],
+  /** The measuring round's trees. */
+  round: ['round'],
   /** Notes, their photos and the needs-a-look queue. */
   notes: ['notes'],
   /** A tree's readings and its holes, which field entries add to. */

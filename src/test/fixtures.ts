@@ -51,6 +51,7 @@ export const measurement = (overrides: Partial<Measurement> = {}): Measurement =
   confirmedOutlier: false,
   superseded: false,
   recordedBy: 11,
+  clientId: null,
   createdAt: '2025-04-01T12:00:00Z',
   ...overrides,
 });
@@ -65,6 +66,7 @@ export const taphole = (overrides: Partial<Taphole> = {}): Taphole => ({
   bitCm: 0.79375,
   collection: 'vacuum',
   recordedBy: 11,
+  clientId: null,
   createdAt: '2026-03-01T12:00:00Z',
   ...overrides,
 });

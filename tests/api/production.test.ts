@@ -5,6 +5,8 @@ import path from 'node:path';
 import request from 'supertest';
 import { afterEach, describe, expect, it } from 'vitest';
 import { ConfigError, DEFAULT_SESSION_SECRET, loadConfig } from '../../server/config';
+import { createApp } from '../../server/app';
+import { quietLogger } from '../../server/lib/logger';
 import { errorHandler } from '../../server/middleware/errors';
 import { makeTestApp } from './test-app';
 
@@ -101,6 +103,43 @@ describe('error bodies carry only our own words', () => {
       expect(JSON.stringify(res.body)).not.toContain(root);
     });
   }
+
+  it('when the built client is served, then the service worker, its manifest and the shell are asked for afresh, and hashed assets may be cached', async () => {
+    const t = await makeTestApp();
+    closers.push(t.close);
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'clearwood-client-'));
+    fs.mkdirSync(path.join(dir, 'assets'));
+    for (const [file, body] of [
+      ['index.html', '<!doctype html><title>Clearwood</title>'],
+      ['sw.js', 'self.addEventListener("fetch", () => {});'],
+      ['manifest.webmanifest', '{"name":"Clearwood"}'],
+      ['assets/index-abc123.js', 'console.log(1);'],
+    ])
+      fs.writeFileSync(path.join(dir, file), body);
+    const app = createApp({
+      config: { ...t.config, NODE_ENV: 'production' },
+      db: t.db,
+      clientDir: dir,
+      log: quietLogger,
+    });
+    closers.push(async () => {
+      await app.ctx.advice.close();
+      app.ctx.photos.close();
+    });
+    for (const url of ['/sw.js', '/manifest.webmanifest', '/index.html']) {
+      const res = await request(app).get(url);
+      expect({ url, status: res.status, cache: res.headers['cache-control'] }).toEqual({
+        url,
+        status: 200,
+        cache: 'no-cache',
+      });
+    }
+    const asset = await request(app).get('/assets/index-abc123.js');
+    expect(asset.headers['cache-control']).toBe('public, max-age=3600');
+    const csp = (await request(app).get('/sign-in')).headers['content-security-policy'];
+    expect(csp).toContain("worker-src 'self'");
+    expect(csp).toContain("manifest-src 'self'");
+  });
 
   it('when a library throws with an internal message, then the client gets a plain 500 and the log gets the detail', () => {
     const logged: unknown[] = [];

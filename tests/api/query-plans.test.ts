@@ -228,6 +228,27 @@ describeOnSqlite('query plans of the hot reads', () => {
     }
   });
 
+  it("when the measuring round or a tree's record is read, then no statement walks a whole table", async () => {
+    expect(await offIndex(`/api/sugarbushes/${team.standId}/round`)).toEqual([]);
+    expect(await offIndex(`/api/trees/${treeId}/record`)).toEqual([]);
+  });
+
+  it('when a reading is sent again with its client id, then the look-up stays on its index', async () => {
+    const body = {
+      measuredOn: '2025-11-21',
+      dbhCm: 43.3,
+      clientId: '5a8f2c1e-7d4b-4e6a-9c3f-2b1d0e9a8c7f',
+    };
+    const send = () =>
+      owner.agent
+        .post(`/api/trees/${treeId}/measurements`)
+        .set('x-csrf-token', owner.csrf)
+        .send(body);
+    expect((await send()).status).toBe(201);
+    const steps = await offIndexDuring(async () => expect((await send()).status).toBe(200));
+    expect(steps).toEqual([]);
+  });
+
   it("when a tree's advice page is read, then no statement walks a whole table", async () => {
     expect(await offIndex(`/api/trees/${treeId}/advice`)).toEqual([]);
   });

@@ -213,6 +213,18 @@ const cases: RouteCase[] = [
     allowed: ['owner', 'forester'],
   },
   {
+    name: 'read the measuring round',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/round`,
+    allowed: everyone,
+  },
+  {
+    name: "read a tree's record for the advisor",
+    method: 'get',
+    path: (i) => `/api/trees/${i.treeId}/record`,
+    allowed: everyone,
+  },
+  {
     name: 'list tapholes',
     method: 'get',
     path: (i) => `/api/trees/${i.treeId}/tapholes`,

@@ -13,6 +13,7 @@ const toMeasurement = (r: Record<string, unknown>): Measurement => ({
   confirmedOutlier: Boolean(r.confirmed_outlier),
   superseded: Number(r.superseded) > 0,
   recordedBy: (r.recorded_by as number | null) ?? null,
+  clientId: (r.client_id as string | null) ?? null,
   createdAt: r.created_at as string,
 });
 
@@ -37,6 +38,10 @@ export function measurementsRepository(db: Knex) {
     },
     async find(id: number) {
       const row = await withSuperseded().where('m.id', id).first();
+      return row ? toMeasurement(row) : undefined;
+    },
+    async findByClientId(clientId: string) {
+      const row = await withSuperseded().where('m.client_id', clientId).first();
       return row ? toMeasurement(row) : undefined;
     },
     /** The tree's standing readings (no later row corrects them), leaving out one being corrected. */
@@ -75,6 +80,7 @@ export function measurementsRepository(db: Knex) {
           corrects_id: m.correctsId ?? null,
           confirmed_outlier: m.confirmedOutlier,
           recorded_by: userId,
+          client_id: m.clientId ?? null,
         })
         .returning('id');
       return typeof row === 'object' ? (row.id as number) : (row as number);

@@ -26,13 +26,14 @@ export function measurementsRoutes(ctx: AppContext) {
     validate({ body: measurementInputSchema }),
     async (_req, res) => {
       const { sugarbushId, userId } = accessOf(res);
-      const m = await service.record(
+      const { entry, created } = await service.record(
         res.locals.treeId,
         sugarbushId,
         userId,
         parsed<MeasurementInput>(res, 'body'),
       );
-      res.status(201).json(m);
+      // A resend of an entry already stored answers 200 with it.
+      res.status(created ? 201 : 200).json(entry);
     },
   );
 

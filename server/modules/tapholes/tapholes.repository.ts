@@ -14,6 +14,7 @@ const toTaphole = (r: Record<string, unknown>): Taphole => ({
   drilledOn: (r.drilled_on as string | null) ?? null,
   stainHit: r.stain_hit === null || r.stain_hit === undefined ? null : Boolean(r.stain_hit),
   recordedBy: (r.recorded_by as number | null) ?? null,
+  clientId: (r.client_id as string | null) ?? null,
   createdAt: r.created_at as string,
 });
 
@@ -31,6 +32,10 @@ export function tapholesRepository(db: Knex) {
         .limit(range.limit);
       return { items: rows.map(toTaphole), total: Number(n) };
     },
+    async findByClientId(clientId: string) {
+      const row = await db('tapholes').where({ client_id: clientId }).first();
+      return row ? toTaphole(row) : undefined;
+    },
     async create(treeId: number, userId: number, t: TapholeInput) {
       const [row] = await db('tapholes')
         .insert({
@@ -44,6 +49,7 @@ export function tapholesRepository(db: Knex) {
           drilled_on: t.drilledOn ?? null,
           stain_hit: t.stainHit ?? null,
           recorded_by: userId,
+          client_id: t.clientId ?? null,
         })
         .returning('id');
       return toTaphole(

@@ -3,15 +3,15 @@ import type { AppContext } from '../../context';
 import { pageOf } from '../../lib/paging';
 import { accessOf, requirePermission, treeAccess } from '../../middleware/auth';
 import { parsed, validate } from '../../middleware/validate';
-import { auditRepository } from '../audit/audit.repository';
 import { listQuerySchema, type ListQuery } from '../../../shared/schemas/list-query';
 import { tapholeInputSchema, type TapholeInput } from '../../../shared/schemas/taphole';
-import { refreshTrees } from '../advice/refresh-trees';
 import { tapholesRepository } from './tapholes.repository';
+import { tapholesService } from './tapholes.service';
 
 export function tapholesRoutes(ctx: AppContext) {
   const router = Router();
   const repo = tapholesRepository(ctx.db);
+  const service = tapholesService(ctx);
 
   router.get(
     '/trees/:treeId/tapholes',
@@ -32,20 +32,9 @@ export function tapholesRoutes(ctx: AppContext) {
       const { sugarbushId, userId } = accessOf(res);
       const treeId = res.locals.treeId as number;
       const input = parsed<TapholeInput>(res, 'body');
-      const hole = await ctx.db.transaction(async (trx) => {
-        const made = await tapholesRepository(trx).create(treeId, userId, input);
-        await auditRepository(trx).record({
-          sugarbushId,
-          userId,
-          action: 'create',
-          entity: 'taphole',
-          entityId: made.id,
-          detail: input,
-        });
-        await refreshTrees(trx, sugarbushId, [treeId]);
-        return made;
-      });
-      res.status(201).json(hole);
+      const { entry, created } = await service.record(treeId, sugarbushId, userId, input);
+      // A resend of an entry already stored answers 200 with it.
+      res.status(created ? 201 : 200).json(entry);
     },
   );
 

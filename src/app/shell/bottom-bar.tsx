@@ -2,12 +2,12 @@ import { useId, useState } from 'react';
 import { Link, useLocation } from 'react-router';
 import type { PublicUser } from '@shared/schemas/auth';
 import type { Role } from '@shared/schemas/enums';
-import { Button } from '@/components/ui/button';
 import { cn } from '@/components/ui/cn';
 import { paths, type SectionKey } from '@/config/paths';
 import { SugarbushSwitcher } from '@/features/sugarbushes/components/sugarbush-switcher';
 import { phonePriority } from './sections';
-import { sectionsFor, useSignOut, useSwitchSugarbush } from './shell-nav';
+import { sectionsFor, useSwitchSugarbush } from './shell-nav';
+import { SignOutButton } from './sign-out-button';
 
 interface Props {
   user: PublicUser;
@@ -26,7 +26,6 @@ export function BottomBar({ user, sugarbushId, role, section }: Props) {
   // The panel closes by itself once the user moves to another page.
   const open = openAt === location.key;
   const switchTo = useSwitchSugarbush(section);
-  const { signOut, pending } = useSignOut();
 
   const allowed = sectionsFor(role);
   const primary = role
@@ -62,9 +61,7 @@ export function BottomBar({ user, sugarbushId, role, section }: Props) {
           )}
           <div className="mt-4 border-t border-rule pt-3">
             <p className="text-sm font-bold">{user.name}</p>
-            <Button block className="mt-2" onClick={signOut} disabled={pending}>
-              Sign out
-            </Button>
+            <SignOutButton block className="mt-2" />
           </div>
         </div>
       )}

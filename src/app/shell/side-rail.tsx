@@ -1,11 +1,11 @@
 import { Link } from 'react-router';
 import type { PublicUser } from '@shared/schemas/auth';
 import type { Role } from '@shared/schemas/enums';
-import { Button } from '@/components/ui/button';
 import { cn } from '@/components/ui/cn';
 import { paths, type SectionKey } from '@/config/paths';
 import { SugarbushSwitcher } from '@/features/sugarbushes/components/sugarbush-switcher';
-import { sectionsFor, useSignOut, useSwitchSugarbush } from './shell-nav';
+import { sectionsFor, useSwitchSugarbush } from './shell-nav';
+import { SignOutButton } from './sign-out-button';
 
 interface Props {
   user: PublicUser;
@@ -17,7 +17,6 @@ interface Props {
 /** Desktop navigation: the name, the stand, the role's sections, and the user. */
 export function SideRail({ user, sugarbushId, role, section }: Props) {
   const switchTo = useSwitchSugarbush(section);
-  const { signOut, pending } = useSignOut();
   return (
     <div className="sticky top-0 hidden h-screen w-60 shrink-0 flex-col border-r border-rule px-4 py-6 md:flex print:hidden">
       <Link to={paths.home.href()} className="text-lg font-bold tracking-wide">
@@ -54,9 +53,7 @@ export function SideRail({ user, sugarbushId, role, section }: Props) {
       <div className="mt-6 border-t border-rule pt-4">
         <p className="text-sm font-bold">{user.name}</p>
         <p className="truncate text-sm text-bark">{user.email}</p>
-        <Button variant="quiet" className="mt-1 px-0" onClick={signOut} disabled={pending}>
-          Sign out
-        </Button>
+        <SignOutButton variant="quiet" className="mt-1 px-0" />
       </div>
     </div>
   );

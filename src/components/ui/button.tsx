@@ -13,12 +13,15 @@ export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   variant?: Variant;
   /** Full width on phones, natural width from the md breakpoint. */
   block?: boolean;
+  /** 44 px tall at every width, not only on phones: for pages used in the field. */
+  field?: boolean;
   ref?: Ref<HTMLButtonElement>;
 }
 
 export function Button({
   variant = 'secondary',
   block = false,
+  field = false,
   className,
   type = 'button',
   ...props
@@ -27,7 +30,8 @@ export function Button({
     <button
       type={type}
       className={cn(
-        'inline-flex min-h-11 items-center justify-center gap-2 rounded px-4 text-base md:min-h-9',
+        'inline-flex min-h-11 items-center justify-center gap-2 rounded px-4 text-base',
+        !field && 'md:min-h-9',
         'disabled:cursor-not-allowed',
         variants[variant],
         block && 'w-full md:w-auto',

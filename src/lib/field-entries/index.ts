@@ -1,7 +1,10 @@
 export { fieldEntryKeys, newClientId, type FieldEntry, type FieldEntryResult } from './field-entry';
 export {
+  fieldEntryScope,
+  isRefusal,
   registerFieldEntryDefaults,
   refreshAfterFieldEntry,
   sendFieldEntry,
 } from './send-field-entry';
-export { useSendFieldEntry } from './use-send-field-entry';
+export { refusedEntries, useRefusedEntries, type RefusedEntry } from './refused-entries';
+export { useSendFieldEntry, useWaitingFieldEntries } from './use-send-field-entry';

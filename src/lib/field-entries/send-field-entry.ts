@@ -1,9 +1,12 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
+import type { MeResponse } from '@shared/schemas/auth';
+import { api, isApiError } from '@/lib/api-client';
+import { authKeys } from '@/lib/auth';
 import { queryRoots } from '@/lib/query-roots';
 import { treeDetailKeys } from '@/lib/tree-detail-keys';
 import { treeListKeys } from '@/lib/tree-list-keys';
 import { fieldEntryKeys, type FieldEntry, type FieldEntryResult } from './field-entry';
+import { refusedEntries } from './refused-entries';
 
 export function sendFieldEntry(entry: FieldEntry): Promise<FieldEntryResult> {
   const body = { ...entry.input, clientId: entry.clientId };
@@ -12,7 +15,7 @@ export function sendFieldEntry(entry: FieldEntry): Promise<FieldEntryResult> {
     : api.post(`/trees/${entry.treeId}/tapholes`, body);
 }
 
-/** What a stored entry moves: the tree's record and advice, the register, the plan, the map. */
+/** What a stored entry moves: the tree's record and advice, the register, the plan, the map, the round. */
 export function refreshAfterFieldEntry(queryClient: QueryClient, entry: FieldEntry) {
   return Promise.all([
     queryClient.invalidateQueries({ queryKey: treeDetailKeys.tree(entry.treeId) }),
@@ -22,16 +25,62 @@ export function refreshAfterFieldEntry(queryClient: QueryClient, entry: FieldEnt
     queryClient.invalidateQueries({ queryKey: treeListKeys.all() }),
     queryClient.invalidateQueries({ queryKey: queryRoots.plans }),
     queryClient.invalidateQueries({ queryKey: queryRoots.map }),
+    queryClient.invalidateQueries({ queryKey: queryRoots.round }),
   ]);
 }
 
+/** The server answered and will answer the same again: a 4xx other than "signed out". */
+export const isRefusal = (error: unknown): boolean =>
+  isApiError(error) && error.status >= 400 && error.status < 500 && error.status !== 401;
+
+/** An entry recorded by someone other than who is signed in now: never sent under this session. */
+export class OtherAuthorError extends Error {
+  constructor() {
+    super('This entry was recorded by someone else on this device');
+    this.name = 'OtherAuthorError';
+  }
+}
+
+/** Who recorded an entry, kept in the mutation's `meta` (it is persisted with the entry). */
+export interface FieldEntryMeta extends Record<string, unknown> {
+  authorId?: number;
+}
+
+/** Every field entry is sent one after another, in the order recorded. */
+export const fieldEntryScope = { id: 'field-entries' };
+
+const MAX_RETRY_DELAY_MS = 60_000;
+
 /**
  * Registered once on the app's query client, so a mutation restored after a reload knows how to
- * send itself (a restored mutation has its variables but not the component's function).
+ * send itself (a restored mutation has its variables but not the component's function). Offline,
+ * an entry waits (paused); a lost answer, a server error or an ended session is retried, the
+ * client id making a second arrival harmless; a refusal moves the entry to the refused list with
+ * the server's reason, where it stays until its author edits or discards it.
  */
 export function registerFieldEntryDefaults(queryClient: QueryClient): void {
   queryClient.setMutationDefaults(fieldEntryKeys.all, {
-    mutationFn: (entry: FieldEntry) => sendFieldEntry(entry),
+    scope: fieldEntryScope,
+    mutationFn: (entry: FieldEntry, context) => {
+      const authorId = (context?.meta as FieldEntryMeta | undefined)?.authorId;
+      const me = queryClient.getQueryData<MeResponse | null>(authKeys.me());
+      if (authorId !== undefined && me && me.user.id !== authorId)
+        return Promise.reject(new OtherAuthorError());
+      return sendFieldEntry(entry);
+    },
+    retry: (_failures: number, error: unknown) =>
+      !isRefusal(error) && !(error instanceof OtherAuthorError),
+    retryDelay: (failures: number) => Math.min(1000 * 2 ** failures, MAX_RETRY_DELAY_MS),
     onSuccess: (_result: unknown, entry: FieldEntry) => refreshAfterFieldEntry(queryClient, entry),
+    onError: (error: unknown, entry: FieldEntry) => {
+      if (!isRefusal(error) || !isApiError(error)) return;
+      refusedEntries.add({
+        entry,
+        code: error.code,
+        message: error.message,
+        ...(error.fields ? { fields: error.fields } : {}),
+        refusedAt: new Date().toISOString(),
+      });
+    },
   });
 }

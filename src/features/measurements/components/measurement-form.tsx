@@ -17,7 +17,7 @@ import {
   outlierQuestion,
   type MeasureMode,
   type MeasurementFormValues,
-} from './measurement-form-values';
+} from '@/lib/measurement-entry';
 
 const modeLabels: Record<MeasureMode, string> = {
   diameter: 'Diameter',

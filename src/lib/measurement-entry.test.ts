@@ -1,8 +1,4 @@
-import {
-  dbhCmFrom,
-  measurementFormSchema,
-  type MeasurementFormValues,
-} from './measurement-form-values';
+import { dbhCmFrom, measurementFormSchema, type MeasurementFormValues } from './measurement-entry';
 
 const typed = (overrides: Partial<MeasurementFormValues> = {}): MeasurementFormValues => ({
   measuredOn: '2026-10-02',

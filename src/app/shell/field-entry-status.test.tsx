@@ -1,0 +1,80 @@
+import { act, screen, waitFor } from '@testing-library/react';
+import { registerFieldEntryDefaults, refusedEntries, type FieldEntry } from '@/lib/field-entries';
+import { json, mockApi } from '@/test/api-mock';
+import { meAs } from '@/test/fixtures';
+import { renderPage } from '@/test/render';
+import { FieldEntryStatus } from './field-entry-status';
+
+const entry: FieldEntry = {
+  kind: 'measurement',
+  clientId: '0b6f3c3e-5d1a-4c1e-9d7a-3e2f1a0b9c8d',
+  treeId: 5,
+  tag: 'B-5',
+  input: { measuredOn: '2026-10-02', dbhCm: 41.2 },
+};
+
+afterEach(() => refusedEntries.clear());
+
+describe('entries the server refused', () => {
+  it('when a sent entry is refused, then it is listed with the reason and stays until discarded after a confirmation', async () => {
+    mockApi({
+      'GET /api/auth/me': meAs('forester'),
+      'POST /api/trees/5/measurements': json(409, {
+        error: { code: 'tree-retired', message: 'Tree B-5 is marked removed' },
+      }),
+    });
+    const { queryClient, user } = renderPage({
+      path: '/',
+      url: '/',
+      element: <FieldEntryStatus />,
+    });
+    registerFieldEntryDefaults(queryClient);
+    await act(() =>
+      queryClient
+        .getMutationCache()
+        .build(queryClient, { mutationKey: ['field-entry'] })
+        .execute(entry)
+        .catch(() => undefined),
+    );
+    expect(await screen.findByText('1 entry not accepted')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Review' }));
+    expect(screen.getByText('Tree B-5 is marked removed')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Discard…' }));
+    expect(screen.getByText(/Discard this entry\?/)).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Discard it' }));
+    await waitFor(() => expect(screen.queryByText('1 entry not accepted')).not.toBeInTheDocument());
+    expect(refusedEntries.list()).toEqual([]);
+  });
+
+  it('when a refused reading is edited, then it is sent again with a new client id and leaves the list', async () => {
+    const api = mockApi({
+      'GET /api/auth/me': meAs('forester'),
+      'POST /api/trees/5/measurements': json(201, { id: 1 }),
+    });
+    refusedEntries.add({
+      entry,
+      code: 'unconfirmed-outlier',
+      message: '4.5 cm more than last season — re-measure or confirm.',
+      fields: { confirmedOutlier: '4.5 cm more than last season — re-measure or confirm' },
+      refusedAt: '2026-10-02T12:00:00Z',
+    });
+    const { queryClient, user } = renderPage({
+      path: '/',
+      url: '/',
+      element: <FieldEntryStatus />,
+    });
+    registerFieldEntryDefaults(queryClient);
+    await user.click(await screen.findByRole('button', { name: 'Review' }));
+    await user.click(screen.getByRole('button', { name: 'Edit and send again' }));
+    await user.clear(screen.getByLabelText('DBH (cm)'));
+    await user.type(screen.getByLabelText('DBH (cm)'), '40.9');
+    await user.click(screen.getByLabelText('I measured again: this reading is right'));
+    await user.click(screen.getByRole('button', { name: 'Send again' }));
+    await waitFor(() => expect(api.to('POST /api/trees/5/measurements')).toHaveLength(1));
+    const body = api.to('POST /api/trees/5/measurements')[0].body as Record<string, unknown>;
+    expect(body.dbhCm).toBe(40.9);
+    expect(body.confirmedOutlier).toBe(true);
+    expect(body.clientId).not.toBe(entry.clientId);
+    expect(refusedEntries.list()).toEqual([]);
+  });
+});

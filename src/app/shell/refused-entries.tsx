@@ -1,0 +1,91 @@
+import { useId, useState } from 'react';
+import { Button } from '@/components/ui/button';
+import {
+  newClientId,
+  refusedEntries,
+  useSendFieldEntry,
+  type FieldEntry,
+  type RefusedEntry,
+} from '@/lib/field-entries';
+import { formatDate, formatDbh, useUnitSystem } from '@/lib/units';
+import { RefusedMeasurementForm } from './refused-measurement-form';
+
+function describe(entry: FieldEntry, unit: 'in' | 'cm'): string {
+  if (entry.kind === 'measurement')
+    return `Reading of ${formatDbh(entry.input.dbhCm, unit)} on ${formatDate(entry.input.measuredOn)}`;
+  return `Taphole for ${entry.input.season}`;
+}
+
+/** One refused entry: what it was, the server's reason, and the author's choices. */
+function RefusedItem({ refused }: { refused: RefusedEntry }) {
+  const { unit } = useUnitSystem();
+  const send = useSendFieldEntry();
+  const [editing, setEditing] = useState(false);
+  const [confirmDiscard, setConfirmDiscard] = useState(false);
+  const { entry } = refused;
+  // A new id: the refused one was never stored, and its content may change.
+  const resend = (next: FieldEntry) => {
+    refusedEntries.remove(entry.clientId);
+    send.mutate(next);
+  };
+  return (
+    <li className="rounded border border-rule bg-paper p-3">
+      <p className="font-bold">
+        Tree {entry.tag}: {describe(entry, unit)}
+      </p>
+      <p className="mt-1 text-alert">{refused.message}</p>
+      {editing && entry.kind === 'measurement' ? (
+        <RefusedMeasurementForm
+          refused={{ ...refused, entry }}
+          onCancel={() => setEditing(false)}
+          onSend={(input) => resend({ ...entry, clientId: newClientId(), input })}
+        />
+      ) : confirmDiscard ? (
+        <div role="group" aria-label="Discard the entry" className="mt-2">
+          <p>Discard this entry? It was never stored and will be gone from this device.</p>
+          <div className="mt-2 flex flex-wrap gap-3">
+            <Button field onClick={() => refusedEntries.remove(entry.clientId)}>
+              Discard it
+            </Button>
+            <Button field onClick={() => setConfirmDiscard(false)}>
+              Keep it
+            </Button>
+          </div>
+        </div>
+      ) : (
+        <div className="mt-2 flex flex-wrap gap-3">
+          {entry.kind === 'measurement' ? (
+            <Button field onClick={() => setEditing(true)}>
+              Edit and send again
+            </Button>
+          ) : (
+            <Button field onClick={() => resend({ ...entry, clientId: newClientId() })}>
+              Send again
+            </Button>
+          )}
+          <Button field onClick={() => setConfirmDiscard(true)}>
+            Discard…
+          </Button>
+        </div>
+      )}
+    </li>
+  );
+}
+
+/** The entries the server refused on sync, kept on the device until their author decides. */
+export function RefusedEntries({ entries }: { entries: readonly RefusedEntry[] }) {
+  const headingId = useId();
+  return (
+    <section aria-labelledby={headingId} className="mt-3">
+      <h2 id={headingId} className="text-lg font-bold">
+        Not accepted by the server
+      </h2>
+      <p className="text-sm">Each stays here until you send it again or discard it.</p>
+      <ul className="mt-2 flex flex-col gap-3">
+        {entries.map((r) => (
+          <RefusedItem key={r.entry.clientId} refused={r} />
+        ))}
+      </ul>
+    </section>
+  );
+}

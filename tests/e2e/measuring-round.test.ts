@@ -1,0 +1,187 @@
+import type { Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { refreshTrees } from '../../server/modules/advice/refresh-trees';
+import { demoServerAndBrowser, offSite, recordHosts, signInAs } from './harness';
+import { horizontalOverflow, seriousAxeViolations, shortButtons } from './page-checks';
+
+const env = demoServerAndBrowser();
+const season = new Date().getUTCFullYear();
+let standId: number;
+
+// A new season: the demo's readings of this year are taken away, so every tree is due again.
+beforeAll(async () => {
+  const db = env.server.db;
+  standId = (await db('sugarbushes').where({ name: 'Owl Ledge' }).first('id')).id;
+  const treeIds = (await db('trees').where({ sugarbush_id: standId }).pluck('id')).map(Number);
+  await db('measurements').whereIn('tree_id', treeIds).where({ season }).delete();
+  await db.transaction((trx) => refreshTrees(trx, standId, treeIds));
+});
+
+const treeOf = (tag: string) =>
+  env.server.db('trees').where({ sugarbush_id: standId, tag }).first('id', 'latest_dbh_cm');
+
+const readingsThisSeason = async (treeId: number) =>
+  env.server.db('measurements').where({ tree_id: treeId, season });
+
+/** The tree the round shows now, by its heading. */
+async function currentTag(page: Page): Promise<string> {
+  const heading = page.locator('#round-tree');
+  await heading.waitFor();
+  return ((await heading.textContent()) ?? '').replace(/^Tree\s+/, '').trim();
+}
+
+/** Measures the tree on screen a little above its last DBH, in cm, and moves on. */
+async function measureCurrent(page: Page): Promise<{ tag: string; treeId: number }> {
+  const tag = await currentTag(page);
+  const tree = await treeOf(tag);
+  await page.getByLabel('Unit', { exact: true }).selectOption('cm');
+  await page.getByLabel('DBH', { exact: true }).fill((Number(tree.latest_dbh_cm) + 0.3).toFixed(1));
+  await page.getByText('Advice with this reading').waitFor();
+  await page.getByLabel('Crown dieback').selectOption('5');
+  await page.getByLabel('Condition note').fill('Sound bole');
+  await page.getByRole('button', { name: 'Record and next tree' }).click();
+  await page.getByText(`Recorded tree ${tag}`).waitFor();
+  return { tag, treeId: tree.id };
+}
+
+const openRound = async (page: Page) => {
+  await page.goto(`${env.server.url}/sugarbushes/${standId}/round`);
+  await page.locator('#round-tree').waitFor({ timeout: 20000 });
+};
+
+describe('the forester walks the measuring round on a phone, in and out of coverage', () => {
+  it('records five trees, two offline across a reload; both reach the server once, a refused one shows its reason, and sign-out warns', async () => {
+    const context = await env.browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await context.newPage();
+    const hosts = recordHosts(page);
+    await signInAs(page, env.server.url, 'forester@fernside.example');
+    await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
+    await openRound(page);
+    // The service worker has the shell before the network goes.
+    await page.evaluate(async () => {
+      await navigator.serviceWorker.ready;
+    });
+    const due = Number(
+      (
+        await env.server
+          .db('trees')
+          .where({ sugarbush_id: standId })
+          .whereIn('status', ['active', 'held-out'])
+          .count({ n: '*' })
+      )[0].n,
+    );
+    await page.getByText(`0 of ${due.toLocaleString('en-US')} measured in ${season}`).waitFor();
+
+    const online: { tag: string; treeId: number }[] = [];
+    for (let i = 0; i < 3; i++) online.push(await measureCurrent(page));
+    await expect
+      .poll(
+        async () =>
+          (await Promise.all(online.map((t) => readingsThisSeason(t.treeId)))).map((r) => r.length),
+        { timeout: 15000 },
+      )
+      .toEqual([1, 1, 1]);
+
+    await context.setOffline(true);
+    const offline = [await measureCurrent(page), await measureCurrent(page)];
+    await page.getByText('2 waiting to send').waitFor();
+
+    // Reloaded without a network: the shell comes from the service worker, the queue from IndexedDB.
+    await page.reload();
+    await page.locator('#round-tree').waitFor({ timeout: 20000 });
+    await page.getByText('2 waiting to send').waitFor();
+    await page.getByText(/You.re offline/).waitFor();
+    expect(await page.evaluate(() => navigator.serviceWorker.controller !== null)).toBe(true);
+    await page.getByText(`5 of ${due.toLocaleString('en-US')} measured in ${season}`).waitFor();
+    for (const t of offline) expect(await readingsThisSeason(t.treeId)).toHaveLength(0);
+
+    // Meanwhile the owner marks the next tree removed, from another device.
+    const refusedTree = await measureCurrent(page);
+    await page.getByText('3 waiting to send').waitFor();
+    const owner = await env.browser.newContext();
+    const ownerPage = await owner.newPage();
+    await signInAs(ownerPage, env.server.url, 'owner@fernside.example');
+    await ownerPage.waitForURL(/\/sugarbushes\/\d+\/trees/);
+    const csrf = (await (await owner.request.get(`${env.server.url}/api/auth/csrf`)).json()).token;
+    const patched = await owner.request.patch(`${env.server.url}/api/trees/${refusedTree.treeId}`, {
+      headers: { 'x-csrf-token': csrf },
+      data: { status: 'removed' },
+    });
+    expect(patched.status()).toBe(200);
+    await owner.close();
+
+    await context.setOffline(false);
+    await expect
+      .poll(
+        async () =>
+          (await Promise.all(offline.map((t) => readingsThisSeason(t.treeId)))).map(
+            (r) => r.length,
+          ),
+        { timeout: 20000 },
+      )
+      .toEqual([1, 1]);
+    for (const t of offline) {
+      const [row] = await readingsThisSeason(t.treeId);
+      expect(row.client_id).toMatch(/^[0-9a-f-]{36}$/);
+      expect(row.crown_dieback_pct).toBe(5);
+    }
+    await page.getByText('1 entry not accepted').waitFor({ timeout: 15000 });
+    expect(await page.getByText(/waiting to send/).count()).toBe(0);
+    await page.getByRole('button', { name: 'Review' }).click();
+    await page.getByText(`Tree ${refusedTree.tag} is marked removed`).waitFor();
+    expect(await readingsThisSeason(refusedTree.treeId)).toHaveLength(0);
+
+    // Signing out would lose the refused entry and one waiting offline: the app says so first.
+    await context.setOffline(true);
+    await measureCurrent(page);
+    await page.getByRole('button', { name: 'More' }).click();
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByText('Signing out deletes 2 entries that are not on the server').waitFor();
+    await page.getByRole('button', { name: 'Stay signed in' }).click();
+    await context.setOffline(false);
+    await expect.poll(() => page.getByText(/waiting to send/).count(), { timeout: 15000 }).toBe(0);
+
+    // Signing out anyway forgets the refused entry: the next person on this phone sees none of it.
+    // (The panel with the sign-out button is still open.)
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByText('Signing out deletes 1 entry that is not on the server').waitFor();
+    await page.getByRole('button', { name: 'Sign out and lose 1' }).click();
+    await page.waitForURL(/\/sign-in/);
+    await signInAs(page, env.server.url, 'owner@fernside.example');
+    await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
+    await page.locator('main h1').waitFor();
+    expect(await page.getByText(/not accepted|waiting to send/).count()).toBe(0);
+    expect(offSite(hosts)).toEqual([]);
+    await context.close();
+  });
+
+  it('the round page passes axe, fits the screen and keeps its buttons 44 px tall, on a phone and on a laptop', async () => {
+    for (const viewport of [
+      { width: 390, height: 844 },
+      { width: 1280, height: 800 },
+    ]) {
+      // axe is injected as an inline script, which the app's CSP rightly refuses.
+      const context = await env.browser.newContext({ viewport, bypassCSP: true });
+      const page = await context.newPage();
+      await signInAs(page, env.server.url, 'forester@fernside.example');
+      await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
+      await openRound(page);
+      // With the advice and the confirmation open, as in the woods.
+      const tree = await treeOf(await currentTag(page));
+      await page.getByLabel('Unit', { exact: true }).selectOption('cm');
+      await page
+        .getByLabel('DBH', { exact: true })
+        .fill((Number(tree.latest_dbh_cm) + 6).toFixed(1));
+      await page.getByRole('group', { name: 'Confirm the reading' }).waitFor();
+      expect({ viewport, violations: await seriousAxeViolations(page) }).toEqual({
+        viewport,
+        violations: [],
+      });
+      expect(await horizontalOverflow(page)).toBeLessThanOrEqual(0);
+      // On a phone every button on the page; on a laptop the round's own (the shell's rail is
+      // sized for a mouse there).
+      expect(await shortButtons(page, viewport.width < 768 ? 'body' : '[data-round]')).toEqual([]);
+      await context.close();
+    }
+  });
+});
