@@ -3,6 +3,7 @@ import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, it } from 'vitest';
 import type { PlanItem, StandPlanResponse } from '../../shared/schemas/plan';
 import { demoServerAndBrowser, offSite, recordHosts, signInAs } from './harness';
+import { checkedViewports, expectReadable, signedInForChecks } from './page-checks';
 
 const env = demoServerAndBrowser();
 
@@ -43,6 +44,16 @@ async function pdfLines(pdf: Buffer): Promise<string[]> {
   return lines;
 }
 
+/** The sheet has every line loaded: its Print button is enabled. */
+const sheetComplete = (page: Page) =>
+  page.waitForFunction(
+    () =>
+      !(document.querySelector('article button') as HTMLButtonElement | null)?.disabled &&
+      document.querySelector('table[aria-label="Field sheet"] tbody tr') !== null,
+    undefined,
+    { timeout: 60_000 },
+  );
+
 describe('the printed field sheet, in a real browser', () => {
   it('the owner issues the plan, then prints the whole stand’s sheet: one line for every tree the plan taps, and the cautions', async () => {
     const page = await env.browser.newPage({ viewport: { width: 1280, height: 900 } });
@@ -68,13 +79,7 @@ describe('the printed field sheet, in a real browser', () => {
     await page.waitForURL(/\/plan\/field-sheet/);
     const print = page.getByRole('button', { name: 'Print' });
     await print.waitFor();
-    await page.waitForFunction(
-      () =>
-        !(document.querySelector('article button') as HTMLButtonElement | null)?.disabled &&
-        document.querySelector('table[aria-label="Field sheet"]') !== null,
-      undefined,
-      { timeout: 60_000 },
-    );
+    await sheetComplete(page);
     expect(await page.locator('table[aria-label="Field sheet"] tbody tr').count()).toBe(
       toTap.length,
     );
@@ -102,5 +107,20 @@ describe('the printed field sheet, in a real browser', () => {
 
     expect(offSite(hosts)).toEqual([]);
     await page.close();
+  });
+
+  it('reads on a phone and a laptop: no serious accessibility findings, nothing wider than the window', async () => {
+    for (const viewport of checkedViewports) {
+      const { context, page, sugarbushId } = await signedInForChecks(
+        env.browser,
+        env.server.url,
+        'tapper@fernside.example',
+        viewport,
+      );
+      await page.goto(`${env.server.url}/sugarbushes/${sugarbushId}/plan/field-sheet`);
+      await sheetComplete(page);
+      await expectReadable(page, viewport);
+      await context.close();
+    }
   });
 });

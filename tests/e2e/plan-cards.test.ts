@@ -2,11 +2,14 @@ import { describe, expect, it } from 'vitest';
 import { demoServerAndBrowser, offSite, recordHosts, signInAs } from './harness';
 import {
   axeContext,
+  checkedViewports,
   cutOffElements,
+  expectReadable,
   horizontalOverflow,
   seriousAxeFindings,
   shortButtons,
-} from './layout-checks';
+  signedInForChecks,
+} from './page-checks';
 
 const env = demoServerAndBrowser();
 
@@ -92,26 +95,18 @@ describe('the plan as cards on a phone, in a real browser', () => {
 
   it('the plan page has no serious accessibility findings and nothing wider than the window, on a phone and on a desktop', async () => {
     const tree = await treeWithPriorHoles();
-    for (const viewport of [
-      { width: 390, height: 844 },
-      { width: 1280, height: 800 },
-    ]) {
-      const context = await env.browser.newContext({ ...axeContext, viewport });
-      const page = await context.newPage();
-      await signInAs(page, env.server.url, 'tapper@fernside.example');
-      await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
+    for (const viewport of checkedViewports) {
+      const { context, page } = await signedInForChecks(
+        env.browser,
+        env.server.url,
+        'tapper@fernside.example',
+        viewport,
+      );
       await page.goto(`${env.server.url}/sugarbushes/${tree.standId}/plan?season=2027`);
       const phone = viewport.width < 768;
       if (phone) await page.locator('[data-tree-card]').first().waitFor({ timeout: 30000 });
       else await page.getByRole('table', { name: 'Season plan' }).waitFor({ timeout: 30000 });
-      expect({ viewport, overflow: await horizontalOverflow(page) }).toEqual({
-        viewport,
-        overflow: 0,
-      });
-      expect({ viewport, findings: await seriousAxeFindings(page) }).toEqual({
-        viewport,
-        findings: [],
-      });
+      await expectReadable(page, viewport);
       if (phone) {
         const cards = page.getByRole('list', { name: 'Trees in walking order' });
         expect(await page.locator('[data-tree-card]').count()).toBeGreaterThan(1);
