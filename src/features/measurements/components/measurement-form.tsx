@@ -1,9 +1,15 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useId, useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { crownDiebackClasses, type MeasurementInput } from '@shared/schemas/measurement';
+import type { MeasurementInput } from '@shared/schemas/measurement';
 import { Field, controlClass } from '@/components/ui/field';
 import { cn } from '@/components/ui/cn';
+import {
+  ConfirmReading,
+  CrownDiebackSelect,
+  LengthUnitSelect,
+  ReadingNoteField,
+} from '@/components/reading-fields';
 import { FormFooter } from '@/components/ui/form-footer';
 import { isApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -144,66 +150,40 @@ export function MeasurementForm({ treeId }: { treeId: number }) {
               />
             )}
           </Field>
-          <Field label="Unit" className="w-24">
-            {(control) => (
-              <select {...control} {...form.register('unit')} className={controlClass}>
-                <option value="in">in</option>
-                <option value="cm">cm</option>
-              </select>
-            )}
-          </Field>
+          <LengthUnitSelect registration={form.register('unit')} />
         </div>
 
         {(check || confirmError) && (
-          <div
-            role="group"
-            aria-label="Confirm the reading"
-            className="rounded border-l-4 border-sap bg-sap/10 px-4 py-3"
+          <ConfirmReading
+            question={check ? outlierQuestion(check, values) : confirmError}
+            registration={form.register('confirmedOutlier')}
+            invalid={Boolean(confirmError)}
+            className="border-sap bg-sap/10 px-4 py-3"
+            checkboxClassName="h-5 w-5 accent-sap"
+            after={
+              confirmError && (
+                <p className="text-sm text-alert">Confirm it, or correct the value.</p>
+              )
+            }
           >
-            <p className="font-bold">{check ? outlierQuestion(check, values) : confirmError}</p>
             <p className="mt-1 max-w-prose text-sm">
               A change this size is usually a slipped tape or a typing error. Until it is confirmed,
               the advice leaves it out.
             </p>
-            <label className="mt-2 inline-flex min-h-11 items-center gap-2 md:min-h-8">
-              <input
-                {...form.register('confirmedOutlier')}
-                type="checkbox"
-                aria-invalid={Boolean(confirmError)}
-                className="h-5 w-5 accent-sap"
-              />
-              I measured again: this reading is right
-            </label>
-            {confirmError && (
-              <p className="text-sm text-alert">Confirm it, or correct the value.</p>
-            )}
-          </div>
+          </ConfirmReading>
         )}
 
-        <Field label="Crown dieback" error={errors.crownDiebackPct?.message} className="max-w-xs">
-          {(control) => (
-            <select {...control} {...form.register('crownDiebackPct')} className={controlClass}>
-              <option value="">Not rated</option>
-              {crownDiebackClasses.map((pct) => (
-                <option key={pct} value={String(pct)}>
-                  {pct} %
-                </option>
-              ))}
-            </select>
-          )}
-        </Field>
+        <CrownDiebackSelect
+          registration={form.register('crownDiebackPct')}
+          error={errors.crownDiebackPct?.message}
+          className="max-w-xs"
+        />
 
-        <Field label="Note" error={errors.note?.message}>
-          {(control) => (
-            <textarea
-              {...control}
-              {...form.register('note')}
-              rows={2}
-              maxLength={1000}
-              className={cn(controlClass, 'py-2')}
-            />
-          )}
-        </Field>
+        <ReadingNoteField
+          label="Note"
+          registration={form.register('note')}
+          error={errors.note?.message}
+        />
 
         <FormFooter
           error={formError}

@@ -1,10 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useId, useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { crownDiebackClasses, type MeasurementInput } from '@shared/schemas/measurement';
+import type { MeasurementInput } from '@shared/schemas/measurement';
 import { Button } from '@/components/ui/button';
 import { cn } from '@/components/ui/cn';
 import { controlClass, Field } from '@/components/ui/field';
+import {
+  ConfirmReading,
+  CrownDiebackSelect,
+  LengthUnitSelect,
+  ReadingNoteField,
+} from '@/components/reading-fields';
 import {
   dbhCmFrom,
   measurementFormSchema,
@@ -129,62 +135,33 @@ export function RoundEntryForm({
             />
           )}
         </Field>
-        <Field label="Unit" className="w-24">
-          {(control) => (
-            <select {...control} {...form.register('unit')} className={controlClass}>
-              <option value="in">in</option>
-              <option value="cm">cm</option>
-            </select>
-          )}
-        </Field>
+        <LengthUnitSelect registration={form.register('unit')} />
       </div>
 
       {(check || confirmError) && (
-        <div
-          role="group"
-          aria-label="Confirm the reading"
-          className="rounded border-l-4 border-alert bg-alert/5 px-3 py-2"
+        <ConfirmReading
+          question={check ? outlierQuestion(check, values) : confirmError}
+          registration={form.register('confirmedOutlier')}
+          invalid={Boolean(confirmError)}
+          className="border-alert bg-alert/5 px-3 py-2"
+          checkboxClassName="h-6 w-6 accent-moss"
         >
-          <p className="font-bold">{check ? outlierQuestion(check, values) : confirmError}</p>
           <p className="mt-1 text-sm">
             Far from this tree&apos;s trend: usually a slipped tape or a typing error.
           </p>
-          <label className="mt-1 inline-flex min-h-11 items-center gap-2">
-            <input
-              {...form.register('confirmedOutlier')}
-              type="checkbox"
-              aria-invalid={Boolean(confirmError)}
-              className="h-6 w-6 accent-moss"
-            />
-            I measured again: this reading is right
-          </label>
-        </div>
+        </ConfirmReading>
       )}
 
-      <Field label="Crown dieback" error={errors.crownDiebackPct?.message}>
-        {(control) => (
-          <select {...control} {...form.register('crownDiebackPct')} className={controlClass}>
-            <option value="">Not rated</option>
-            {crownDiebackClasses.map((pct) => (
-              <option key={pct} value={String(pct)}>
-                {pct} %
-              </option>
-            ))}
-          </select>
-        )}
-      </Field>
+      <CrownDiebackSelect
+        registration={form.register('crownDiebackPct')}
+        error={errors.crownDiebackPct?.message}
+      />
 
-      <Field label="Condition note" error={errors.note?.message}>
-        {(control) => (
-          <textarea
-            {...control}
-            {...form.register('note')}
-            rows={2}
-            maxLength={1000}
-            className={cn(controlClass, 'py-2')}
-          />
-        )}
-      </Field>
+      <ReadingNoteField
+        label="Condition note"
+        registration={form.register('note')}
+        error={errors.note?.message}
+      />
 
       <LiveAdvice record={record.data} round={round} reading={reading} />
 
