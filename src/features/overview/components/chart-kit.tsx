@@ -1,7 +1,9 @@
 import type { ReactElement } from 'react';
-import { ResponsiveContainer } from 'recharts';
+import { Bar, BarChart, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { TrendSeason } from '@shared/schemas/trends';
+import { axisProps, tooltipStyle } from '@/components/ui/chart-frame';
 import { colors } from '@/lib/theme';
+import { formatNumber } from '@/lib/units';
 
 /** Margins that leave a phone's 390 px mostly to the plot. */
 export const chartMargin = { top: 8, right: 8, bottom: 0, left: -8 };
@@ -38,5 +40,49 @@ export function ChartBox({ children }: { children: ReactElement }) {
     <ResponsiveContainer width="100%" height="100%">
       {children}
     </ResponsiveContainer>
+  );
+}
+
+export interface StackSeries {
+  key: string;
+  label: string;
+  colour: string;
+}
+
+/** Bars of 100 % per season, stacked by `series`: the shares a season's trees fall into. */
+export function PercentStackChart({
+  data,
+  series,
+  stackId,
+}: {
+  data: Record<string, number | string>[];
+  series: readonly StackSeries[];
+  stackId: string;
+}) {
+  return (
+    <ChartBox>
+      <BarChart data={data} margin={chartMargin}>
+        <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
+        <YAxis
+          width={56}
+          tickFormatter={unitTick('%')}
+          domain={[0, 100]}
+          ticks={percentTicks}
+          {...axisProps(chartFont)}
+        />
+        <Tooltip contentStyle={tooltipStyle} formatter={(v) => `${formatNumber(Number(v), 1)} %`} />
+        <Legend {...legendProps} />
+        {series.map((s) => (
+          <Bar
+            key={s.key}
+            dataKey={s.key}
+            name={s.label}
+            stackId={stackId}
+            fill={s.colour}
+            isAnimationActive={false}
+          />
+        ))}
+      </BarChart>
+    </ChartBox>
   );
 }

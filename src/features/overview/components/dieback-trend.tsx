@@ -1,19 +1,9 @@
-import { Bar, BarChart, Legend, Tooltip, XAxis, YAxis } from 'recharts';
 import { diebackGroups, type TrendSeason, type TrendsResponse } from '@shared/schemas/trends';
-import { axisProps, tooltipStyle } from '@/components/ui/chart-frame';
 import { paths } from '@/config/paths';
 import { colors } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 import { diebackSentence, percent } from '../lib/trend-words';
-import {
-  ChartBox,
-  chartFont,
-  chartMargin,
-  legendProps,
-  percentTicks,
-  seasonTick,
-  unitTick,
-} from './chart-kit';
+import { PercentStackChart, seasonTick } from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 const groupColours = [colors.moss, colors.advice.rest, colors.sap, colors.alert];
@@ -42,33 +32,15 @@ export function DiebackTrend({ trends }: { trends: TrendsResponse }) {
       title="Crown dieback"
       sentence={diebackSentence(trends)}
       chart={
-        <ChartBox>
-          <BarChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
-            <YAxis
-              width={56}
-              tickFormatter={unitTick('%')}
-              domain={[0, 100]}
-              ticks={percentTicks}
-              {...axisProps(chartFont)}
-            />
-            <Tooltip
-              contentStyle={tooltipStyle}
-              formatter={(v) => `${formatNumber(Number(v), 1)} %`}
-            />
-            <Legend {...legendProps} />
-            {diebackGroups.map((g, n) => (
-              <Bar
-                key={g.key}
-                dataKey={g.key}
-                name={g.label}
-                stackId="crown"
-                fill={groupColours[n]}
-                isAnimationActive={false}
-              />
-            ))}
-          </BarChart>
-        </ChartBox>
+        <PercentStackChart
+          data={data}
+          stackId="crown"
+          series={diebackGroups.map((g, n) => ({
+            key: g.key,
+            label: g.label,
+            colour: groupColours[n],
+          }))}
+        />
       }
       table={
         <TrendTable

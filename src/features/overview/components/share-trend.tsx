@@ -1,20 +1,10 @@
-import { Bar, BarChart, Legend, Tooltip, XAxis, YAxis } from 'recharts';
 import { shareBands } from '@shared/schemas/share-bands';
 import type { TrendsResponse } from '@shared/schemas/trends';
-import { axisProps, tooltipStyle } from '@/components/ui/chart-frame';
 import { paths } from '@/config/paths';
 import { colors } from '@/lib/theme';
 import { formatNumber } from '@/lib/units';
 import { percent, shareSentence } from '../lib/trend-words';
-import {
-  ChartBox,
-  chartFont,
-  chartMargin,
-  legendProps,
-  percentTicks,
-  seasonTick,
-  unitTick,
-} from './chart-kit';
+import { PercentStackChart, seasonTick } from './chart-kit';
 import { FigureLink, TrendFigure, TrendTable } from './trend-figure';
 
 /** From little clear wood left to plenty: alert to moss, through the accent. */
@@ -43,33 +33,15 @@ export function ShareTrend({ trends }: { trends: TrendsResponse }) {
       title="Clear wood in the tapping zone"
       sentence={shareSentence(trends)}
       chart={
-        <ChartBox>
-          <BarChart data={data} margin={chartMargin}>
-            <XAxis dataKey="x" minTickGap={2} {...axisProps(chartFont)} />
-            <YAxis
-              width={56}
-              tickFormatter={unitTick('%')}
-              domain={[0, 100]}
-              ticks={percentTicks}
-              {...axisProps(chartFont)}
-            />
-            <Tooltip
-              contentStyle={tooltipStyle}
-              formatter={(v) => `${formatNumber(Number(v), 1)} %`}
-            />
-            <Legend {...legendProps} />
-            {shareBands.map((b, n) => (
-              <Bar
-                key={b.key}
-                dataKey={b.key}
-                name={b.label}
-                stackId="share"
-                fill={bandColours[n]}
-                isAnimationActive={false}
-              />
-            ))}
-          </BarChart>
-        </ChartBox>
+        <PercentStackChart
+          data={data}
+          stackId="share"
+          series={shareBands.map((g, n) => ({
+            key: g.key,
+            label: g.label,
+            colour: bandColours[n],
+          }))}
+        />
       }
       table={
         <TrendTable
