@@ -1,3 +1,4 @@
+import type { Boundary } from '../../../shared/geo/boundary';
 import os from 'node:os';
 import type { Knex } from 'knex';
 import { Piscina } from 'piscina';
@@ -62,7 +63,12 @@ export interface AdviceJobs {
   /** Issuing a plan and reading the issued copy against the stand, in a worker. */
   issuedPlan<T>(task: IssuedPlanTask): Promise<T>;
   /** A CSV file read and checked row by row in a worker (`server/modules/imports/read-rows.ts`). */
-  readImport(of: ImportKind, bytes: Uint8Array, mapping: ImportMapping): Promise<ReadRows>;
+  readImport(
+    of: ImportKind,
+    bytes: Uint8Array,
+    mapping: ImportMapping,
+    boundary: Boundary | null,
+  ): Promise<ReadRows>;
   close(): Promise<void>;
 }
 
@@ -216,8 +222,8 @@ export function createAdviceJobs(opts: {
       return task<T>({ kind: 'issued-plan', task: t });
     },
 
-    readImport(of, bytes, mapping) {
-      return task<ReadRows>({ kind: 'read-import', of, bytes, mapping });
+    readImport(of, bytes, mapping, boundary) {
+      return task<ReadRows>({ kind: 'read-import', of, bytes, mapping, boundary });
     },
 
     async close() {

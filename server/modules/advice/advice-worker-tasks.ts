@@ -1,3 +1,4 @@
+import type { Boundary } from '../../../shared/geo/boundary';
 import type { Knex } from 'knex';
 import type { DatabaseTarget } from '../../config';
 import { openDb } from '../../db';
@@ -52,6 +53,7 @@ export type AdviceTask =
       of: ImportKind;
       bytes: Uint8Array;
       mapping: ImportMapping;
+      boundary: Boundary | null;
     }
   /** Seasons with a measurement or a taphole of the stand on record. */
   | (Omit<OnStand, 'season'> & { kind: 'recorded-seasons' })
@@ -99,7 +101,8 @@ export async function runAdviceTask(
   | ReadRows
   | Awaited<ReturnType<typeof runIssuedPlanTask>>
 > {
-  if (task.kind === 'read-import') return readRows(task.of, task.bytes, task.mapping);
+  if (task.kind === 'read-import')
+    return readRows(task.of, task.bytes, task.mapping, task.boundary);
   const db = dbFor(task.database);
   if (task.kind === 'issued-plan') return runIssuedPlanTask(db, task.task);
   if (task.kind === 'recorded-seasons')

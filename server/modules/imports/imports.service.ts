@@ -9,6 +9,7 @@ import {
   type ImportMapping,
   type ImportResult,
 } from '../../../shared/schemas/imports';
+import { mapRepository } from '../map/map.repository';
 import { importsRepository } from './imports.repository';
 import { matchMeasurements, matchTapholes, matchTrees, type Matched } from './match-rows';
 import type { ImportRow, MeasurementRow, ReadRows, TapholeRow, TreeRow } from './read-rows';
@@ -56,15 +57,24 @@ export function importsService(ctx: AppContext) {
       mapping: ImportMapping,
       dryRun: boolean,
     ): Promise<ImportResult> {
-      const read = await ctx.advice.readImport(kind, bytes, mapping);
+      const boundary =
+        kind === 'trees' ? await mapRepository(ctx.db).boundary(access.sugarbushId) : null;
+      const read = await ctx.advice.readImport(kind, bytes, mapping, boundary);
+      if (read.fatal) throw new AppError(400, 'invalid-input', read.fatal, { file: read.fatal });
       const result: ImportResult = {
         kind,
         dryRun,
+        source: read.source,
         rows: read.rows,
         created: 0,
         unchanged: read.repeats,
         updated: 0,
         errors: read.errors,
+        warnings: read.warnings,
+        defaults: {
+          species: mapping.defaults.species ?? null,
+          status: mapping.defaults.status ?? 'active',
+        },
         columns: read.columns,
         preview: read.preview,
       };
