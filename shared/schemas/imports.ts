@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { speciesSchema, treeStatusSchema } from './enums';
 import type { Permission } from './permissions';
 
 /** What a CSV file can bring into a stand's record. */
@@ -119,12 +120,20 @@ const columnsSchema = z.record(
 );
 export const importMappingSchema = z.preprocess(
   (v) =>
-    v && typeof v === 'object' && !Array.isArray(v) && !('columns' in v) && !('updateExisting' in v)
+    v &&
+    typeof v === 'object' &&
+    !Array.isArray(v) &&
+    !('columns' in v) &&
+    !('updateExisting' in v) &&
+    !('defaults' in v)
       ? { columns: v }
       : v,
   z.object({
     columns: columnsSchema.default({}),
     updateExisting: z.boolean().default(false),
+    defaults: z
+      .object({ species: speciesSchema.optional(), status: treeStatusSchema.optional() })
+      .default({}),
   }),
 );
 export type ImportMapping = z.infer<typeof importMappingSchema>;
@@ -134,6 +143,9 @@ export const importFormSchema = z.object({
   kind: z.enum(importKinds),
   columns: columnsSchema,
   updateExisting: z.boolean(),
+  /** For trees: the species and status of a row (or waypoint) that gives none; '' is "none stated". */
+  defaultSpecies: z.union([speciesSchema, z.literal('')]),
+  defaultStatus: z.union([treeStatusSchema, z.literal('')]),
 });
 export type ImportForm = z.infer<typeof importFormSchema>;
 
@@ -159,9 +171,20 @@ export interface ImportColumn {
   field: ImportField | null;
 }
 
+/** A tree file is a spreadsheet's CSV or a handheld GPS's GPX waypoints, told apart by content. */
+export type ImportSource = 'csv' | 'gpx';
+
+/**
+ * A waypoint (or CSV row) this far outside the stand's boundary, in metres, is flagged: a GPS
+ * reading under a canopy strays by tens of metres, so a tree just past the line is not one.
+ */
+export const OUTSIDE_BOUNDARY_WARN_M = 100;
+
 export interface ImportResult {
   kind: ImportKind;
   dryRun: boolean;
+  /** `gpx`: each row is a waypoint, numbered from 1 in the file's order. */
+  source: ImportSource;
   /** Data rows read (blank rows are not counted). */
   rows: number;
   /** Rows written as new records (or that would be, in a dry run). */
@@ -172,6 +195,10 @@ export interface ImportResult {
   updated: number;
   /** Empty when every row could be taken; when not, nothing was written. */
   errors: ImportRowError[];
+  /** Rows that can be imported but deserve a look (a tree far outside the boundary). */
+  warnings: ImportRowError[];
+  /** The species and status given to rows that name none, as the mapping stated them. */
+  defaults: { species: string | null; status: string };
   columns: ImportColumn[];
   /** The first data rows as read, cell by cell in the file's column order (for a preview). */
   preview: string[][];

@@ -18,7 +18,7 @@ describe('importing readings from a spreadsheet, in a real browser', () => {
     await page.getByRole('heading', { name: 'Import records' }).waitFor();
     await page.getByLabel('What the file holds').selectOption('measurements');
     // A spreadsheet in a decimal-comma language: semicolons, a byte-order mark, no unit in the header.
-    await page.getByLabel('CSV file').setInputFiles({
+    await page.getByLabel('CSV or GPX file').setInputFiles({
       name: 'readings.csv',
       mimeType: 'text/csv',
       buffer: Buffer.from('\uFEFFTag;Date;DBH\nOL-0003;2026-11-02;14,5\n', 'utf8'),

@@ -12,8 +12,7 @@ import type { EvaluatedTree, GuidelineChoice } from '../compliance/compliance-ta
 import type { TrendResult } from '../trends/stand-trends';
 import type { AdviceTask, PreviewGuideline } from './advice-worker-tasks';
 import type { IssuedPlanTask } from '../issued-plans/issued-plan-tasks';
-import type { ReadRows } from '../imports/read-rows';
-import type { ImportKind, ImportMapping } from '../../../shared/schemas/imports';
+import type { ImportOutcome, ImportTask } from '../imports/run-import';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
 const CHUNK = 500;
@@ -61,8 +60,8 @@ export interface AdviceJobs {
   ): Promise<TrendResult>;
   /** Issuing a plan and reading the issued copy against the stand, in a worker. */
   issuedPlan<T>(task: IssuedPlanTask): Promise<T>;
-  /** A CSV file read and checked row by row in a worker (`server/modules/imports/read-rows.ts`). */
-  readImport(of: ImportKind, bytes: Uint8Array, mapping: ImportMapping): Promise<ReadRows>;
+  /** An import, whole, in a worker with its own connection (`runImport`). */
+  importFile(t: ImportTask): Promise<ImportOutcome>;
   close(): Promise<void>;
 }
 
@@ -216,8 +215,8 @@ export function createAdviceJobs(opts: {
       return task<T>({ kind: 'issued-plan', task: t });
     },
 
-    readImport(of, bytes, mapping) {
-      return task<ReadRows>({ kind: 'read-import', of, bytes, mapping });
+    importFile(t) {
+      return task<ImportOutcome>({ kind: 'import', ...t });
     },
 
     async close() {

@@ -8,8 +8,7 @@ import {
   type EvaluatedTree,
   type GuidelineChoice,
 } from '../compliance/compliance-task';
-import { readRows, type ReadRows } from '../imports/read-rows';
-import type { ImportKind, ImportMapping } from '../../../shared/schemas/imports';
+import { runImport, type ImportOutcome, type ImportTask } from '../imports/run-import';
 import { diffPlans } from '../plans/plan-diff';
 import { loadStandTrees } from '../plans/plans.repository';
 import type { TrendResult } from '../trends/stand-trends';
@@ -45,14 +44,8 @@ export type AdviceTask =
   | (OnStand & { kind: 'preview'; standVersion: number; guideline: PreviewGuideline })
   /** Every tree tapped in the season, held against each guideline (not stored). */
   | (OnStand & { kind: 'compliance'; guidelines: GuidelineChoice[] })
-  /** A CSV file read into checked rows (no database). */
-  | {
-      kind: 'read-import';
-      database: DatabaseTarget;
-      of: ImportKind;
-      bytes: Uint8Array;
-      mapping: ImportMapping;
-    }
+  /** A CSV or GPX file read, checked, matched and (all rows or none) written. */
+  | (ImportTask & { kind: 'import'; database: DatabaseTarget })
   /** Seasons with a measurement or a taphole of the stand on record. */
   | (Omit<OnStand, 'season'> & { kind: 'recorded-seasons' })
   /** Issuing a plan, and what reads the issued copy against the whole stand. */
@@ -96,11 +89,11 @@ export async function runAdviceTask(
   | GuidelinePreview
   | EvaluatedTree[]
   | TrendResult
-  | ReadRows
+  | ImportOutcome
   | Awaited<ReturnType<typeof runIssuedPlanTask>>
 > {
-  if (task.kind === 'read-import') return readRows(task.of, task.bytes, task.mapping);
   const db = dbFor(task.database);
+  if (task.kind === 'import') return runImport(db, task);
   if (task.kind === 'issued-plan') return runIssuedPlanTask(db, task.task);
   if (task.kind === 'recorded-seasons')
     return trendsRepository(db).recordedSeasons(task.sugarbushId);

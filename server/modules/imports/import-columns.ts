@@ -81,15 +81,19 @@ export function resolveColumns(
     if (!header.includes(name))
       errors.push({ row: 1, column: name, message: `The file has no column "${name}"` });
   for (const oneOf of requiredFields[kind]) {
+    // Species may be stated once for every row that gives none.
+    if (oneOf[0] === 'species' && mapping.defaults.species) continue;
     const present = oneOf.filter((f) => index.has(f));
     if (present.length === 0)
       errors.push({
         row: 1,
         column: oneOf[0],
         message:
-          oneOf.length === 1
-            ? `No column holds ${oneOf[0]}: name one so, or map it`
-            : `No column holds ${oneOf.join(', ')} (say the unit: ${oneOf.join(' or ')})`,
+          oneOf[0] === 'species'
+            ? 'No column holds species: map one, or state the species of these trees'
+            : oneOf.length === 1
+              ? `No column holds ${oneOf[0]}: name one so, or map it`
+              : `No column holds ${oneOf.join(', ')} (say the unit: ${oneOf.join(' or ')})`,
       });
     else if (present.length > 1)
       errors.push({

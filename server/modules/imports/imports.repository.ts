@@ -109,20 +109,26 @@ export function importsRepository(db: Knex) {
       return out;
     },
 
-    async insertTrees(sugarbushId: number, rows: readonly TreeRow[]): Promise<void> {
+    /** Insert the trees; their new ids. */
+    async insertTrees(sugarbushId: number, rows: readonly TreeRow[]): Promise<number[]> {
+      const ids: number[] = [];
       for (const part of chunks(rows)) {
-        await db('trees').insert(
-          part.map((r) => ({
-            sugarbush_id: sugarbushId,
-            tag: r.tag,
-            species: r.species,
-            lat: r.lat,
-            lng: r.lng,
-            status: r.status,
-          })),
-        );
+        const made: { id: number }[] = await db('trees')
+          .insert(
+            part.map((r) => ({
+              sugarbush_id: sugarbushId,
+              tag: r.tag,
+              species: r.species,
+              lat: r.lat,
+              lng: r.lng,
+              status: r.status,
+            })),
+          )
+          .returning(['id']);
+        for (const m of made) ids.push(Number(m.id));
         await breathe();
       }
+      return ids;
     },
 
     async updateTree(id: number, r: TreeRow): Promise<void> {

@@ -9,12 +9,16 @@ import {
   type ImportKind,
   type ImportMapping,
   type ImportRowError,
+  type ImportSource,
 } from '../../../shared/schemas/imports';
 import { measurementInputSchema } from '../../../shared/schemas/measurement';
 import { tapholeInputSchema } from '../../../shared/schemas/taphole';
 import { treeInputSchema } from '../../../shared/schemas/tree';
+import type { Boundary } from '../../../shared/geo/boundary';
+import { farOutside } from './far-outside';
 import { resolveColumns } from './import-columns';
-import { readCsv, readNumber, type NumberKind } from './read-csv';
+import { readCsv, readNumber, type CsvTable, type NumberKind } from './read-csv';
+import { gpxColumns, looksLikeXml, readGpx } from './read-gpx';
 
 export interface TreeRow {
   row: number;
@@ -45,6 +49,9 @@ export interface TapholeRow {
 export type ImportRow = TreeRow | MeasurementRow | TapholeRow;
 
 export interface ReadRows<R extends ImportRow = ImportRow> {
+  source: ImportSource;
+  /** The file could not be read at all (a GPX that is not well-formed): a 400, no report. */
+  fatal?: string;
   columns: ImportColumn[];
   preview: string[][];
   /** Data rows read, blank rows left out. */
@@ -53,6 +60,7 @@ export interface ReadRows<R extends ImportRow = ImportRow> {
   records: R[];
   repeats: number;
   errors: ImportRowError[];
+  warnings: ImportRowError[];
 }
 
 /** Fields that may be left empty (an empty cell is null, not a missing value). */
@@ -96,16 +104,53 @@ const schemaOf: Record<ImportKind, ZodType> = {
  * Read a CSV file of one kind into rows in the API's units, each checked by the same schema as
  * a row entered by hand. Pure: runs in a worker thread, touches no database.
  */
-export function readRows(kind: ImportKind, bytes: Uint8Array, mapping: ImportMapping): ReadRows {
-  const table = readCsv(bytes);
-  if (table.error)
-    return { columns: [], preview: [], rows: 0, records: [], repeats: 0, errors: [table.error] };
+export function readRows(
+  kind: ImportKind,
+  bytes: Uint8Array,
+  given: ImportMapping,
+  boundary: Boundary | null = null,
+): ReadRows {
+  const empty = {
+    columns: [],
+    preview: [],
+    rows: 0,
+    records: [],
+    repeats: 0,
+    warnings: [],
+    errors: [],
+  };
+  let table: CsvTable;
+  let source: ImportSource = 'csv';
+  let mapping = given;
+  if (looksLikeXml(bytes)) {
+    source = 'gpx';
+    if (kind !== 'trees')
+      return {
+        ...empty,
+        source,
+        fatal: `A GPX file holds trees (waypoints), not ${kind}: import it as trees`,
+      };
+    const gpx = readGpx(bytes);
+    if ('fatal' in gpx) return { ...empty, source, fatal: gpx.fatal };
+    table = gpx.table;
+    mapping = { ...given, columns: { ...gpxColumns, ...given.columns } };
+  } else table = readCsv(bytes);
+  if (table.error) return { ...empty, source, errors: [table.error] };
   const { columns, index, errors } = resolveColumns(kind, table.header, mapping);
   const preview = table.records
     .filter((r) => r.cells.some((c) => c !== ''))
     .slice(0, PREVIEW_ROWS)
     .map((r) => r.cells.map((c) => c.slice(0, 200)));
-  const out: ReadRows = { columns, preview, rows: 0, records: [], repeats: 0, errors };
+  const out: ReadRows = {
+    source,
+    columns,
+    preview,
+    rows: 0,
+    records: [],
+    repeats: 0,
+    errors,
+    warnings: [],
+  };
   if (errors.length > 0) {
     out.rows = table.records.filter((r) => r.cells.some((c) => c !== '')).length;
     return out;
@@ -153,6 +198,13 @@ export function readRows(kind: ImportKind, bytes: Uint8Array, mapping: ImportMap
       else value = cell;
       values[key] = value;
     }
+    // A species or status the row does not give is the one the mapping states, never a guess.
+    if (kind === 'trees') {
+      if ((values.species ?? '') === '' && mapping.defaults.species)
+        values.species = mapping.defaults.species;
+      if (values.status === undefined && mapping.defaults.status)
+        values.status = mapping.defaults.status;
+    }
     const tag = treeInputSchema.shape.tag.safeParse(values.tag ?? '');
     if (!tag.success)
       rowErrors.push({ row, column: headerOf('tag'), message: tag.error.issues[0].message });
@@ -193,6 +245,8 @@ export function readRows(kind: ImportKind, bytes: Uint8Array, mapping: ImportMap
     seen.set(k, { row, json });
     out.records.push(clean as unknown as ImportRow);
   }
+  if (kind === 'trees' && index.has('lat'))
+    out.warnings = farOutside(boundary, out.records as TreeRow[], headerOf('lat'), source);
   return out;
 }
 

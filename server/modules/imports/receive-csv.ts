@@ -4,11 +4,11 @@ import type { Config } from '../../config';
 import { AppError } from '../../errors';
 import { sizeLabel } from '../basemaps/receive-upload';
 
-const chooseOne = 'Choose a CSV file to import';
+const chooseOne = 'Choose a CSV (or, for trees, GPX) file to import';
 
 /**
  * Receive one CSV file (field `file`, at most `IMPORT_MAX_BYTES`) into memory, and the optional
- * text field `mapping`. The file is read whole by a worker anyway, and nothing is left on disk.
+ * text field `mapping`. The file is read whole by a worker anyway (CSV or GPX), and nothing is left on disk.
  */
 export function receiveCsv(config: Config): RequestHandler {
   const upload = multer({
@@ -43,7 +43,7 @@ export function receiveCsv(config: Config): RequestHandler {
           new AppError(
             400,
             'bad-upload',
-            'The upload could not be read: send a multipart form with the CSV in the field "file"',
+            'The upload could not be read: send a multipart form with the file in the field "file"',
           ),
         );
       next(err);

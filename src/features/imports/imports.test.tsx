@@ -12,11 +12,14 @@ const TREES = 'POST /api/sugarbushes/3/imports/trees';
 const result = (over: Partial<ImportResult> = {}): ImportResult => ({
   kind: 'measurements',
   dryRun: true,
+  source: 'csv',
   rows: 2,
   created: 2,
   unchanged: 0,
   updated: 0,
   errors: [],
+  warnings: [],
+  defaults: { species: null, status: 'active' },
   columns: [
     { header: 'Tag', field: 'tag' },
     { header: 'Date', field: 'measuredOn' },
@@ -73,7 +76,7 @@ describe('the import page', () => {
     const file = new File(['Tag,Date,DBH\n0412,2025-10-01,12\n'], 'readings.csv', {
       type: 'text/csv',
     });
-    await user.upload(screen.getByLabelText('CSV file'), file);
+    await user.upload(screen.getByLabelText('CSV or GPX file'), file);
 
     expect(await screen.findByText('No column holds dbhCm (say the unit)')).toBeInTheDocument();
     // A cell is text, never markup.
@@ -93,6 +96,55 @@ describe('the import page', () => {
     expect(await screen.findByText(/Imported: 2 new/)).toBeInTheDocument();
     expect(api.to(MEASUREMENTS)[2].url.searchParams.get('dryRun')).toBeNull();
     expect(sentMapping(api, MEASUREMENTS, 2).columns.DBH).toBe('dbhIn');
+  });
+
+  it('when a GPX file of waypoints is checked, then a stated species is sent and a waypoint far outside is flagged', async () => {
+    const gpxResult = (species: string | null) =>
+      result({
+        kind: 'trees',
+        source: 'gpx',
+        rows: 2,
+        created: species ? 2 : 0,
+        errors: species
+          ? []
+          : [{ row: 1, column: 'species', message: 'No column holds species: map one' }],
+        warnings: species
+          ? [{ row: 2, column: 'lat', message: 'Waypoint GX-2 lies about 480 m outside' }]
+          : [],
+        defaults: { species, status: 'active' },
+        columns: [
+          { header: 'name', field: 'tag' },
+          { header: 'lat', field: 'lat' },
+          { header: 'lon', field: 'lng' },
+          { header: 'desc', field: null },
+        ],
+        preview: [
+          ['GX-1', '45.001', '-72.5', 'By the brook'],
+          ['GX-2', '45.006', '-72.495', ''],
+        ],
+      });
+    const handler: Handler = ({ body }) => {
+      const mapping = JSON.parse((body as FormData).get('mapping') as string);
+      return { status: 200, body: gpxResult(mapping.defaults.species ?? null) };
+    };
+    const { api, user } = openImports('owner', { [TREES]: handler });
+    await screen.findByLabelText('What the file holds');
+    const file = new File(['<gpx><wpt lat="45" lon="-72"/></gpx>'], 'trees.gpx');
+    await user.upload(screen.getByLabelText('CSV or GPX file'), file);
+    expect(await screen.findByText('No column holds species: map one')).toBeInTheDocument();
+    expect(screen.getByText('By the brook')).toBeInTheDocument();
+    expect(screen.getByRole('columnheader', { name: 'Waypoint' })).toBeInTheDocument();
+
+    await user.selectOptions(
+      screen.getByLabelText('Species of a tree the file gives none'),
+      'sugar-maple',
+    );
+    await user.click(screen.getByRole('button', { name: 'Check again' }));
+    expect(sentMapping(api, TREES, 1).defaults).toEqual({ species: 'sugar-maple' });
+    expect(
+      await screen.findByText(/Waypoint 2: Waypoint GX-2 lies about 480 m outside/),
+    ).toBeInTheDocument();
+    expect(await screen.findByRole('button', { name: 'Import 2 rows' })).toBeEnabled();
   });
 
   it('when a tapper opens it, then only tapholes can be chosen', async () => {

@@ -1,7 +1,15 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import type { Role } from '@shared/schemas/enums';
+import {
+  speciesLabels,
+  species as speciesKeys,
+  treeStatusLabels,
+  treeStatuses,
+  type Role,
+  type Species,
+  type TreeStatus,
+} from '@shared/schemas/enums';
 import {
   importFormSchema,
   importKindLabels,
@@ -36,7 +44,13 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
   const kinds = importableKinds(role);
   const form = useForm<ImportForm>({
     resolver: zodResolver(importFormSchema),
-    defaultValues: { kind: kinds[0], columns: {}, updateExisting: false },
+    defaultValues: {
+      kind: kinds[0],
+      columns: {},
+      updateExisting: false,
+      defaultSpecies: '',
+      defaultStatus: '',
+    },
   });
   const [file, setFile] = useState<File | null>(null);
   const [report, setReport] = useState<ImportResult | null>(null);
@@ -47,10 +61,12 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
   const send = useImportFile(sugarbushId);
   const kind = form.watch('kind');
   const columns = form.watch('columns');
+  const defaultSpecies = form.watch('defaultSpecies');
+  const defaultStatus = form.watch('defaultStatus');
 
   const run = (dryRun: boolean, values: ImportForm, chosen: File | null = file) => {
     if (!chosen) {
-      setFormError('Choose a CSV file first.');
+      setFormError('Choose a file first.');
       return;
     }
     setFormError(null);
@@ -58,7 +74,17 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
       {
         kind: values.kind,
         file: chosen,
-        mapping: { columns: values.columns, updateExisting: values.updateExisting },
+        mapping: {
+          columns: values.columns,
+          updateExisting: values.updateExisting,
+          defaults:
+            values.kind === 'trees'
+              ? {
+                  ...(values.defaultSpecies ? { species: values.defaultSpecies } : {}),
+                  ...(values.defaultStatus ? { status: values.defaultStatus } : {}),
+                }
+              : {},
+        },
         dryRun,
       },
       {
@@ -117,14 +143,14 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
         />
         <Field
           className="w-full min-w-0 md:w-auto"
-          label="CSV file"
-          hint="A spreadsheet's CSV export: comma, semicolon or tab separated."
+          label="CSV or GPX file"
+          hint="A spreadsheet's CSV export (comma, semicolon or tab separated), or for trees a GPS's GPX file: each waypoint's name is the tag."
         >
           {(control) => (
             <input
               {...control}
               type="file"
-              accept=".csv,.txt,text/csv"
+              accept=".csv,.txt,text/csv,.gpx,application/gpx+xml"
               className={`${controlClass} w-full min-w-0`}
               onChange={(e) => {
                 const chosen = e.target.files?.[0] ?? null;
@@ -135,6 +161,35 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
           )}
         </Field>
       </div>
+
+      {kind === 'trees' && (
+        <div className="flex flex-wrap items-end gap-4">
+          <SelectField<Species | ''>
+            label="Species of a tree the file gives none"
+            value={defaultSpecies}
+            options={[
+              { value: '', label: 'None: such a row is reported' },
+              ...speciesKeys.map((k) => ({ value: k, label: speciesLabels[k] })),
+            ]}
+            onChange={(v) => {
+              form.setValue('defaultSpecies', v);
+              setStale(report !== null);
+            }}
+          />
+          <SelectField<TreeStatus | ''>
+            label="Status of a tree the file gives none"
+            value={defaultStatus}
+            options={[
+              { value: '', label: 'Active (the register’s default)' },
+              ...treeStatuses.map((k) => ({ value: k, label: treeStatusLabels[k] })),
+            ]}
+            onChange={(v) => {
+              form.setValue('defaultStatus', v);
+              setStale(report !== null);
+            }}
+          />
+        </div>
+      )}
 
       {kind === 'trees' && (
         <label className="flex min-h-11 items-center gap-3">

@@ -6,7 +6,8 @@ const SHOWN = 200;
 
 /** What a check found: how many rows are new or already on record, and every row that is wrong. */
 export function ImportReport({ report, stale }: { report: ImportResult; stale: boolean }) {
-  const { errors } = report;
+  const { errors, warnings } = report;
+  const rowWord = report.source === 'gpx' ? 'Waypoint' : 'Row';
   return (
     <section aria-labelledby="import-report" className="flex flex-col gap-3">
       <h2 id="import-report" className="text-lg font-bold">
@@ -18,8 +19,15 @@ export function ImportReport({ report, stale }: { report: ImportResult; stale: b
         </p>
       )}
       <p>
-        {formatNumber(report.rows)} {report.rows === 1 ? 'row' : 'rows'} read:{' '}
-        {formatNumber(report.created)} new
+        {formatNumber(report.rows)}{' '}
+        {report.source === 'gpx'
+          ? report.rows === 1
+            ? 'waypoint'
+            : 'waypoints'
+          : report.rows === 1
+            ? 'row'
+            : 'rows'}{' '}
+        read: {formatNumber(report.created)} new
         {report.updated > 0 ? `, ${formatNumber(report.updated)} to update` : ''},{' '}
         {formatNumber(report.unchanged)} already on record.
       </p>
@@ -41,7 +49,7 @@ export function ImportReport({ report, stale }: { report: ImportResult; stale: b
               <thead>
                 <tr className="border-b border-rule text-left">
                   <th scope="col" className="p-2">
-                    Row
+                    {rowWord}
                   </th>
                   <th scope="col" className="p-2">
                     Column
@@ -66,6 +74,24 @@ export function ImportReport({ report, stale }: { report: ImportResult; stale: b
             <p className="text-bark">…and {formatNumber(errors.length - SHOWN)} more.</p>
           )}
         </>
+      )}
+      {warnings.length > 0 && (
+        <div className="flex flex-col gap-2">
+          <h3 className="font-bold">
+            {formatNumber(warnings.length)} {warnings.length === 1 ? 'row' : 'rows'} to look at
+            (they can be imported)
+          </h3>
+          <ul className="flex flex-col gap-1 text-sm">
+            {warnings.slice(0, SHOWN).map((w, i) => (
+              <li key={i}>
+                {rowWord} {w.row}: {w.message}
+              </li>
+            ))}
+          </ul>
+          {warnings.length > SHOWN && (
+            <p className="text-bark">…and {formatNumber(warnings.length - SHOWN)} more.</p>
+          )}
+        </div>
       )}
     </section>
   );

@@ -1,0 +1,135 @@
+import type { Knex } from 'knex';
+import {
+  type ImportKind,
+  type ImportMapping,
+  type ImportResult,
+} from '../../../shared/schemas/imports';
+import { auditRepository } from '../audit/audit.repository';
+import { mapRepository } from '../map/map.repository';
+import { importsRepository } from './imports.repository';
+import { matchMeasurements, matchTapholes, matchTrees, type Matched } from './match-rows';
+import {
+  readRows,
+  type ImportRow,
+  type MeasurementRow,
+  type ReadRows,
+  type TapholeRow,
+  type TreeRow,
+} from './read-rows';
+import { recordsImported } from './records-imported';
+
+const auditEntity: Record<ImportKind, string> = {
+  trees: 'tree',
+  measurements: 'measurement',
+  tapholes: 'taphole',
+};
+
+export interface ImportTask {
+  of: ImportKind;
+  bytes: Uint8Array;
+  mapping: ImportMapping;
+  dryRun: boolean;
+  sugarbushId: number;
+  userId: number;
+}
+
+/**
+ * What an import answers: the report, or a file that cannot be read at all (`fatal`, a 400), and
+ * the seasons whose advice the caller brings current after the commit.
+ */
+export type ImportOutcome = { fatal: string } | { result: ImportResult; seasons: number[] };
+
+/**
+ * One import, whole, in a worker thread with its own connection: read and checked, matched
+ * against the record, then every row written in one transaction — or, when any row is wrong or it
+ * is a dry run, nothing at all. Off the request thread, the statements building and running the
+ * writes stall no other request, and on SQLite the server's one connection stays free for them
+ * (readers go on beside the write; WAL).
+ */
+export async function runImport(db: Knex, task: ImportTask): Promise<ImportOutcome> {
+  const { of: kind, bytes, mapping, dryRun, sugarbushId, userId } = task;
+  const boundary = kind === 'trees' ? await mapRepository(db).boundary(sugarbushId) : null;
+  const read = readRows(kind, bytes, mapping, boundary);
+  if (read.fatal) return { fatal: read.fatal };
+  const result: ImportResult = {
+    kind,
+    dryRun,
+    source: read.source,
+    rows: read.rows,
+    created: 0,
+    unchanged: read.repeats,
+    updated: 0,
+    errors: read.errors,
+    warnings: read.warnings,
+    defaults: {
+      species: mapping.defaults.species ?? null,
+      status: mapping.defaults.status ?? 'active',
+    },
+    columns: read.columns,
+    preview: read.preview,
+  };
+  if (read.errors.length > 0 && read.records.length === 0) return { result, seasons: [] };
+
+  const seasons = await db.transaction(async (trx) => {
+    const repo = importsRepository(trx);
+    const trees = await repo.treesByTag(
+      sugarbushId,
+      read.records.map((r) => r.tag),
+    );
+    const matched = await match(kind, read, trees, repo, mapping);
+    result.errors = [...result.errors, ...matched.errors].sort((a, b) => a.row - b.row);
+    result.unchanged += matched.unchanged;
+    result.created = matched.create.length;
+    result.updated = matched.update.length;
+    if (result.errors.length > 0 || dryRun) return [];
+    if (matched.create.length + matched.update.length === 0) return [];
+
+    let touched: number[];
+    if (kind === 'trees') {
+      const made = await repo.insertTrees(sugarbushId, matched.create as TreeRow[]);
+      for (const r of matched.update as unknown as (TreeRow & { id: number })[])
+        await repo.updateTree(r.id, r);
+      touched = [...made, ...matched.update.map((r) => r.id)];
+    } else {
+      const rows = matched.create as ((MeasurementRow | TapholeRow) & { treeId: number })[];
+      if (kind === 'measurements')
+        await repo.insertMeasurements(rows as (MeasurementRow & { treeId: number })[], userId);
+      else await repo.insertTapholes(rows as (TapholeRow & { treeId: number })[], userId);
+      touched = rows.map((r) => r.treeId);
+    }
+    await auditRepository(trx).record({
+      sugarbushId,
+      userId,
+      action: 'import',
+      entity: auditEntity[kind],
+      detail: { rows: result.rows, created: result.created, updated: result.updated },
+    });
+    return recordsImported(trx, sugarbushId, touched);
+  });
+  return { result, seasons };
+}
+
+async function match(
+  kind: ImportKind,
+  read: ReadRows,
+  trees: Awaited<ReturnType<ReturnType<typeof importsRepository>['treesByTag']>>,
+  repo: ReturnType<typeof importsRepository>,
+  mapping: ImportMapping,
+): Promise<Matched<ImportRow>> {
+  const ids = [...trees.values()].map((t) => t.id);
+  if (kind === 'trees')
+    return matchTrees(read.records as TreeRow[], trees, read.columns, mapping.updateExisting);
+  if (kind === 'measurements')
+    return matchMeasurements(
+      read.records as MeasurementRow[],
+      trees,
+      await repo.measurementsOf(ids),
+      read.columns,
+    );
+  return matchTapholes(
+    read.records as TapholeRow[],
+    trees,
+    await repo.tapholesOf(ids),
+    read.columns,
+  );
+}
