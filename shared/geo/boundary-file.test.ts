@@ -211,6 +211,41 @@ describe('files that are not what they seem', () => {
     ).toMatch(/"Polygon 1" is a point, not an outline/);
   });
 
+  it('when the outline is a bare geometry, a Feature or a FeatureCollection, then each gives the same candidate', async () => {
+    const geometry = { type: 'Polygon', coordinates: [ring] };
+    const feature = { type: 'Feature', properties: { name: 'Sap Run' }, geometry };
+    const reads = await Promise.all(
+      [geometry, feature, { type: 'FeatureCollection', features: [feature] }].map((value) =>
+        text('x.geojson', JSON.stringify(value)),
+      ),
+    );
+    const found = reads.map((r) => candidatesOf(r)[0]);
+    expect(found.map((c) => c.name)).toEqual(['Polygon 1', 'Sap Run', 'Sap Run']);
+    for (const c of found) expect(c.geometry).toEqual(geometry);
+  });
+
+  it('when a feature is a MultiPolygon or a collection of polygons, then it stays one candidate of several parts', async () => {
+    const east = ring.map(([lng, lat]) => [lng + 0.01, lat]);
+    const parts = await text(
+      'x.geojson',
+      JSON.stringify({
+        type: 'Feature',
+        properties: { NAME: 'Two parts' },
+        geometry: {
+          type: 'GeometryCollection',
+          geometries: [
+            { type: 'Polygon', coordinates: [ring] },
+            { type: 'Polygon', coordinates: [east] },
+          ],
+        },
+      }),
+    );
+    const [only] = candidatesOf(parts);
+    expect(candidatesOf(parts)).toHaveLength(1);
+    expect(only).toMatchObject({ name: 'Two parts', geometry: { type: 'MultiPolygon' } });
+    expect(only.geometry.coordinates).toHaveLength(2);
+  });
+
   it('when a file has no extension, then its content says what it is', async () => {
     const kml = readFileSync(new URL('lantern-hollow.kml', fixtures), 'utf8');
     expect(candidatesOf(await text('outline', kml))[0].name).toBe('Lantern Hollow');

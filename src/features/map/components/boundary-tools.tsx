@@ -145,6 +145,8 @@ export function BoundaryTools({
       send(candidates[0].geometry, `Boundary imported from ${file.name}.`);
       return;
     }
+    // The saved outline is hidden while the file's are drawn for the choice.
+    onEditingChange(true);
     setFound({ fileName: file.name, candidates, skipped });
     setStage('choosing');
   };
