@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { area, distance } from '@turf/turf';
 import { describe, expect, it } from 'vitest';
 import { recordHosts, signInAs, demoServerAndBrowser, offSite } from './harness';
+import { axeContext, cutOffElements, expectReadable, shortButtons } from './page-checks';
 
 const env = demoServerAndBrowser();
 const fixture = (name: string) => resolve(process.cwd(), 'tests/fixtures/boundaries', name);
@@ -58,6 +59,26 @@ describe('a boundary from a GIS file, in the browser', () => {
 
     expect(errors).toEqual([]);
     expect(offSite(hosts)).toEqual([]);
+    await context.close();
+  });
+
+  it('when a file of two lots is opened on a phone, then the choice fits the screen, its buttons are 44 px and axe finds nothing serious', async () => {
+    const stand = await env.server.db('sugarbushes').where({ name: 'Owl Ledge' }).first('id');
+    const viewport = { width: 390, height: 844 };
+    const context = await env.browser.newContext({ viewport, ...axeContext });
+    const page = await context.newPage();
+    await signInAs(page, env.server.url, 'owner@fernside.example');
+    await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
+    await page.goto(`${env.server.url}/sugarbushes/${stand.id}/map`);
+    await page.locator('.leaflet-container').waitFor();
+    await page.getByLabel('Boundary file').setInputFiles(fixture('two-lots.geojson'));
+    const list = page.getByRole('group', { name: /two-lots.geojson holds 2 outlines/ });
+    await list.waitFor();
+    const form = page.locator('form', { has: list });
+    await form.scrollIntoViewIfNeeded();
+    expect(await cutOffElements(form)).toEqual([]);
+    expect(await shortButtons(form)).toEqual([]);
+    await expectReadable(page, viewport);
     await context.close();
   });
 });
