@@ -21,7 +21,7 @@ const geojsonFile = (value: unknown, name = 'stand.geojson') => {
 };
 
 // The drawing tools load in their own chunk (Leaflet, geoman, turf), which takes a moment here.
-const findGeojsonInput = () => screen.findByLabelText('GeoJSON file', {}, { timeout: 10_000 });
+const findGeojsonInput = () => screen.findByLabelText('Boundary file', {}, { timeout: 10_000 });
 
 /** A stand-in XMLHttpRequest: reports half the upload sent, then answers as told. */
 function fakeUpload(status: number, body: unknown) {
@@ -81,14 +81,14 @@ describe('editing the woods map', () => {
     expect(api.to('PATCH /api/sugarbushes/3')[0].headers.get('x-csrf-token')).toBe('token-1');
   });
 
-  it('when the file holds a line, then it is refused before sending, saying why', async () => {
+  it('when the file holds a line that does not close, then it is refused before sending, saying why', async () => {
     const { api, user } = openMap();
     await user.upload(
       await findGeojsonInput(),
-      geojsonFile({ type: 'LineString', coordinates: square }),
+      geojsonFile({ type: 'LineString', coordinates: square.slice(0, 4) }),
     );
     expect(await screen.findByRole('alert')).toHaveTextContent(
-      'The file holds a LineString. A boundary must be a Polygon or MultiPolygon.',
+      /"Polygon 1" is a line or track that does not end where it starts \(its ends are \d+ m apart\)/,
     );
     expect(api.to('PATCH /api/sugarbushes/3')).toHaveLength(0);
   });

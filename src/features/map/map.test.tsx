@@ -195,7 +195,7 @@ describe('the woods map', () => {
     await screen.findByRole('region', { name: 'Legend' });
     expect(screen.getByRole('button', { name: 'Where am I' })).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Upload MBTiles' })).not.toBeInTheDocument();
-    expect(screen.queryByRole('button', { name: 'Import GeoJSON' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Import boundary file' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Add tree here' })).not.toBeInTheDocument();
   });
 });

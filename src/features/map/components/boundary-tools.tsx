@@ -1,15 +1,20 @@
 import '../lib/leaflet-setup';
 import L from 'leaflet';
 import { useEffect, useRef, useState } from 'react';
+import { BOUNDARY_FILE_EXTENSIONS, readBoundaryFile } from '@shared/geo/boundary-file';
+import type { BoundaryCandidate, SkippedShape } from '@shared/geo/boundary-shapes';
 import type { Boundary } from '@shared/schemas/sugarbush';
 import { Button } from '@/components/ui/button';
 import { isApiError } from '@/lib/api-client';
 import { colors } from '@/lib/theme';
+import type { UnitSystem } from '@/lib/units';
 import { useUpdateBoundary } from '../api/update-boundary';
-import { parseBoundaryText } from '../lib/geojson-boundary';
+import { readFileBytes } from '../lib/read-file-bytes';
+import { BoundaryChoice } from './boundary-choice';
 import { boundaryRenderer, boundaryStyle } from './boundary-layer';
 
-type Stage = 'idle' | 'drawing' | 'editing';
+type Stage = 'idle' | 'reading' | 'choosing' | 'drawing' | 'editing';
+type Found = { fileName: string; candidates: BoundaryCandidate[]; skipped: SkippedShape[] };
 
 const serverMessage = (error: unknown) =>
   isApiError(error)
@@ -22,12 +27,23 @@ interface BoundaryToolsProps {
   map: L.Map | null;
   /** While the outline is being edited the saved one is hidden, so only one shows. */
   onEditingChange: (editing: boolean) => void;
+  system: UnitSystem;
 }
 
-/** Import a GeoJSON outline, or draw and edit the boundary on the map. */
-export function BoundaryTools({ sugarbushId, boundary, map, onEditingChange }: BoundaryToolsProps) {
+/**
+ * Import an outline from a GIS file (GeoJSON, KML, GPX, zipped Shapefile; several outlines in
+ * one file are chosen from or merged), or draw and edit the boundary on the map.
+ */
+export function BoundaryTools({
+  sugarbushId,
+  boundary,
+  map,
+  onEditingChange,
+  system,
+}: BoundaryToolsProps) {
   const save = useUpdateBoundary(sugarbushId);
   const [stage, setStage] = useState<Stage>('idle');
+  const [found, setFound] = useState<Found | null>(null);
   const [message, setMessage] = useState<{ kind: 'error' | 'done'; text: string } | null>(null);
   const draft = useRef<L.Polygon | null>(null);
   const onCreate = useRef<((event: { layer: L.Layer }) => void) | null>(null);
@@ -40,6 +56,7 @@ export function BoundaryTools({ sugarbushId, boundary, map, onEditingChange }: B
     draft.current?.pm.disable();
     draft.current?.remove();
     draft.current = null;
+    setFound(null);
     setStage('idle');
     onEditingChange(false);
   };
@@ -110,21 +127,61 @@ export function BoundaryTools({ sugarbushId, boundary, map, onEditingChange }: B
 
   const importFile = async (file: File) => {
     setMessage(null);
-    const result = parseBoundaryText(await file.text());
-    if (!result.ok) setMessage({ kind: 'error', text: result.message });
-    else send(result.boundary, `Boundary imported from ${file.name}.`);
+    setStage('reading');
+    let result;
+    try {
+      result = await readBoundaryFile(file.name, await readFileBytes(file));
+    } catch {
+      result = { error: `${file.name} could not be read. Try exporting it again.` };
+    }
+    if ('error' in result) {
+      setStage('idle');
+      setMessage({ kind: 'error', text: result.error });
+      return;
+    }
+    const { candidates, skipped } = result;
+    if (candidates.length === 1 && skipped.length === 0) {
+      setStage('idle');
+      send(candidates[0].geometry, `Boundary imported from ${file.name}.`);
+      return;
+    }
+    // The saved outline is hidden while the file's are drawn for the choice.
+    onEditingChange(true);
+    setFound({ fileName: file.name, candidates, skipped });
+    setStage('choosing');
   };
+
+  const saveChoice = (next: Boundary) =>
+    save.mutateAsync(next).then(() => {
+      setMessage({
+        kind: 'done',
+        text: `Boundary imported from ${found?.fileName ?? 'the file'}.`,
+      });
+      finish();
+    });
 
   return (
     <div className="flex flex-col gap-2">
       <h3 className="text-sm font-bold">Boundary</h3>
-      {stage === 'idle' ? (
+      {stage === 'reading' ? (
+        <p role="status" className="text-sm">
+          Reading the file…
+        </p>
+      ) : stage === 'choosing' && found ? (
+        <BoundaryChoice
+          {...found}
+          system={system}
+          map={map}
+          onSave={saveChoice}
+          onCancel={finish}
+        />
+      ) : stage === 'idle' ? (
         <div className="flex flex-wrap gap-2">
           <input
             ref={fileInput}
             type="file"
-            accept=".geojson,.json,application/geo+json,application/json"
-            aria-label="GeoJSON file"
+            accept={[...BOUNDARY_FILE_EXTENSIONS, 'application/geo+json'].join(',')}
+            aria-label="Boundary file"
             className="sr-only"
             tabIndex={-1}
             onChange={(e) => {
@@ -134,7 +191,7 @@ export function BoundaryTools({ sugarbushId, boundary, map, onEditingChange }: B
             }}
           />
           <Button onClick={() => fileInput.current?.click()} disabled={save.isPending}>
-            Import GeoJSON
+            Import boundary file
           </Button>
           <Button onClick={startDraw} disabled={!map || save.isPending}>
             {boundary ? 'Edit boundary' : 'Draw boundary'}

@@ -233,6 +233,7 @@ export function MapWorkspace({ sugarbushId, data, sugarbush }: MapWorkspaceProps
                   boundary={sugarbush.boundary}
                   map={map}
                   onEditingChange={setEditingBoundary}
+                  system={system}
                 />
               </Suspense>
             )}

@@ -82,7 +82,7 @@ function FigureList({
     <>
       {!f.boundary && (
         <p className="mt-1 text-sm text-bark">
-          No boundary yet. Import GeoJSON or draw the boundary to see area and density.
+          No boundary yet. Import a boundary file or draw the boundary to see area and density.
         </p>
       )}
       <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5 text-sm">

@@ -7,7 +7,6 @@ import {
   storeBackground,
 } from './background';
 import { compassPoint, describePlacement } from './compass';
-import { parseBoundary, parseBoundaryText } from './geojson-boundary';
 import { gridLines, gridStepM } from './grid';
 import { countLegend } from './legend-counts';
 import { filtersFromParams, findByTag, stepFrom, visibleTrees, withFilters } from './map-filters';
@@ -102,46 +101,6 @@ describe('stepping through the trees', () => {
     expect(findByTag(prefixed, '412')?.id).toBe(8);
     expect(findByTag(prefixed, 'ol-0412')?.id).toBe(8);
     expect(findByTag(prefixed, '413')).toBeUndefined();
-  });
-});
-
-const square = [
-  [-72.64, 44.31],
-  [-72.63, 44.31],
-  [-72.63, 44.32],
-  [-72.64, 44.32],
-  [-72.64, 44.31],
-];
-
-describe('an imported GeoJSON boundary', () => {
-  it('is accepted as a bare Polygon, a Feature, or a FeatureCollection of one, unwrapped to its geometry', () => {
-    const polygon = { type: 'Polygon', coordinates: [square] };
-    const feature = { type: 'Feature', properties: {}, geometry: polygon };
-    for (const input of [polygon, feature, { type: 'FeatureCollection', features: [feature] }]) {
-      const result = parseBoundary(input);
-      expect(result).toEqual({ ok: true, boundary: polygon });
-    }
-  });
-
-  it('is refused, with words saying why, when it is no polygon, holds several features, or is broken', () => {
-    const message = (input: unknown) => {
-      const result = parseBoundary(input);
-      return result.ok ? 'accepted' : result.message;
-    };
-    expect(message({ type: 'LineString', coordinates: square })).toBe(
-      'The file holds a LineString. A boundary must be a Polygon or MultiPolygon.',
-    );
-    const feature = { type: 'Feature', geometry: { type: 'Polygon', coordinates: [square] } };
-    expect(message({ type: 'FeatureCollection', features: [feature, feature] })).toMatch(
-      /holds 2 features/,
-    );
-    expect(message({ type: 'FeatureCollection', features: [] })).toMatch(/empty/);
-    expect(message({ type: 'Polygon', coordinates: [square.slice(0, 4)] })).toMatch(/not closed/);
-    expect(message({ foo: 1 })).toMatch(/no "type"/);
-    const text = parseBoundaryText('{ not json');
-    expect(text.ok ? '' : text.message).toBe(
-      "The file isn't valid JSON. Choose a .geojson or .json file.",
-    );
   });
 });
 
