@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { drilledHoleColumns } from '../tapholes/tapholes.repository';
 
 /** Trees read per page: an export of any size holds one page of rows at a time. */
 export const PAGE = 1000;
@@ -73,15 +74,7 @@ export function exportsRepository(db: Knex) {
           { column: 'azimuth_deg', order: 'asc' },
           { column: 'id', order: 'asc' },
         ])
-        .select(
-          'tree_id',
-          'season',
-          'height_cm',
-          'azimuth_deg',
-          'depth_cm',
-          'bit_cm',
-          'collection',
-        );
+        .select(...drilledHoleColumns);
     },
 
     async standName(sugarbushId: number): Promise<string> {

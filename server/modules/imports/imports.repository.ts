@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import type { MeasurementRow, TapholeRow, TreeRow } from './read-rows';
+import { drilledHoleColumns } from '../tapholes/tapholes.repository';
 
 /** Rows per statement: far below either engine's limit on bound values, short enough to interleave. */
 export const BATCH = 400;
@@ -86,15 +87,7 @@ export function importsRepository(db: Knex) {
       for (const part of chunks([...new Set(treeIds)])) {
         const rows = await db('tapholes')
           .whereIn('tree_id', part)
-          .select(
-            'tree_id',
-            'season',
-            'height_cm',
-            'azimuth_deg',
-            'depth_cm',
-            'bit_cm',
-            'collection',
-          );
+          .select(...drilledHoleColumns);
         for (const r of rows)
           out.push({
             treeId: Number(r.tree_id),

@@ -2,6 +2,17 @@ import type { Knex } from 'knex';
 import type { Taphole, TapholeInput } from '../../../shared/schemas/taphole';
 import { insertedId } from '../../lib/paging';
 
+/** The columns that say what was drilled, as the CSV of tapholes carries them. */
+export const drilledHoleColumns = [
+  'tree_id',
+  'season',
+  'height_cm',
+  'azimuth_deg',
+  'depth_cm',
+  'bit_cm',
+  'collection',
+] as const;
+
 const toTaphole = (r: Record<string, unknown>): Taphole => ({
   id: r.id as number,
   treeId: r.tree_id as number,
