@@ -47,6 +47,26 @@ export {
   type SapSpoilage,
 } from './weather';
 export {
+  classifyDay,
+  expectedSyrup,
+  sapHoldingCautions,
+  summarizeSap,
+  formatTemperature,
+  galToL,
+  lToGal,
+  L_PER_US_GAL,
+  SAP_COOL_LIMIT_F,
+  SAP_WARM_LIMIT_F,
+  type RunClass,
+  type DayRun,
+  type ExpectedSyrup,
+  type SapCaution,
+  type SapCautionCode,
+  type SapDay,
+  type SapSummary,
+  type TemperatureUnit,
+} from './season-log';
+export {
   cmToIn,
   inToCm,
   cm2ToIn2,

@@ -15,8 +15,9 @@ export const sapRunLabels: Record<SapRunOutlook, string> = {
 };
 
 export function freezeThaw(minC: number, maxC: number): SapRunOutlook {
-  const lowF = cToF(Math.min(minC, maxC));
-  const highF = cToF(Math.max(minC, maxC));
+  // Rounded to a millionth of a degree so that 40 °F entered in °F is 40 °F again here.
+  const lowF = Math.round(cToF(Math.min(minC, maxC)) * 1e6) / 1e6;
+  const highF = Math.round(cToF(Math.max(minC, maxC)) * 1e6) / 1e6;
   if (highF <= 32) return 'stays-frozen';
   if (lowF >= 32) return 'no-freeze';
   const hardFrost = lowF <= 28;

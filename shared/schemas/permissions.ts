@@ -20,6 +20,8 @@ export const permissions = {
   'read-audit': ['owner'],
   /** Freeze a season's plan as the copy the crew works from. */
   'issue-plan': ['owner'],
+  /** The season log: sap collected, syrup made, the weather by day. */
+  'record-season-log': ['owner', 'forester', 'tapper'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;
@@ -36,6 +38,7 @@ export const permissionLabels: Record<Permission, string> = {
   'manage-members': 'Invite people, change roles, remove members',
   'read-audit': 'Read the record of who changed what',
   'issue-plan': 'Issue the season’s plan to the crew',
+  'record-season-log': 'Record sap and weather',
 };
 
 export function can(role: Role | null | undefined, action: Permission): boolean {

@@ -1,0 +1,85 @@
+import { z } from 'zod';
+import type { RunClass } from '../rules/season-log';
+import { isoDateSchema, isoDay } from './iso-date';
+import { seasonSchema } from './plan';
+
+/** The coldest and warmest daily readings the log takes, in °C (beyond any record in maple country). */
+export const WEATHER_LIMITS_C = { min: -60, max: 45 } as const;
+
+const celsius = (what: string) =>
+  z
+    .number({ error: `Give the ${what} in °C` })
+    .finite(`Give the ${what} as a number`)
+    .min(WEATHER_LIMITS_C.min, `A ${what} below ${WEATHER_LIMITS_C.min} °C is not a reading`)
+    .max(WEATHER_LIMITS_C.max, `A ${what} above ${WEATHER_LIMITS_C.max} °C is not a reading`);
+
+/** A day of weather as recorded: dated no later than tomorrow (the stand's day may run ahead of UTC). */
+export const weatherDayInputSchema = z
+  .object({
+    date: isoDateSchema
+      .refine((d) => d >= '1950-01-01', 'Give a date from 1950 on')
+      .refine(
+        (d) => d <= isoDay(new Date(), 1),
+        'A recorded day cannot be in the future; the forecast comes on its own',
+      ),
+    minC: celsius('night low'),
+    maxC: celsius('day high'),
+  })
+  .strict()
+  .refine((v) => v.minC <= v.maxC, {
+    message: 'The day high cannot be below the night low',
+    path: ['maxC'],
+  });
+export type WeatherDayInput = z.infer<typeof weatherDayInputSchema>;
+
+export const weatherSources = ['manual', 'station', 'forecast'] as const;
+export type WeatherSource = (typeof weatherSources)[number];
+
+export interface WeatherDay {
+  date: string;
+  minC: number;
+  maxC: number;
+  run: RunClass;
+  /** "−4 °C night, 5 °C day: a run" */
+  reason: string;
+  source: WeatherSource;
+  /** The station a day came from, for a station import. */
+  station: string | null;
+}
+
+export const weatherQuerySchema = z.object({ season: seasonSchema.optional() });
+
+/** `GET /api/sugarbushes/:id/weather?season=`: the season's days, oldest first, and the coming days. */
+export interface WeatherSeason {
+  season: number;
+  items: WeatherDay[];
+  total: number;
+  /** The forecast's coming days (empty for a past season), classified the same way. */
+  forecast: WeatherDay[];
+  /** Where the forecast came from, for the page's footnote; null when none was had. */
+  forecastSource: string | null;
+  /** Why there is no forecast, when the provider could not be reached. */
+  forecastError: string | null;
+}
+
+/**
+ * Form fields of `POST …/weather/imports` beside the file: the temperature unit, which a station's
+ * daily summary does not always say; a file that names its unit must agree with it.
+ */
+export const weatherImportFieldsSchema = z.object({
+  unit: z.enum(['F', 'C']).optional(),
+  dryRun: z.coerce.boolean().optional(),
+});
+export type WeatherImportFields = z.infer<typeof weatherImportFieldsSchema>;
+
+export interface WeatherImportResult {
+  station: string | null;
+  unit: 'F' | 'C';
+  added: number;
+  replaced: number;
+  unchanged: number;
+  /** Rows skipped because TMAX or TMIN was missing, with their line numbers. */
+  skipped: { row: number; reason: string }[];
+  days: WeatherDay[];
+  dryRun: boolean;
+}
