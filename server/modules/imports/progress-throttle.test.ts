@@ -6,7 +6,11 @@ describe('the import steps sent to the request thread', () => {
   it('when a loop reports every row, then counts go at most every 100 ms, and each step its first and last', () => {
     let clock = 0;
     const sent: ProgressStep[] = [];
-    const report = throttled((s) => sent.push(s), 100, () => clock);
+    const report = throttled(
+      (s) => sent.push(s),
+      100,
+      () => clock,
+    );
     for (let done = 1; done <= 1000; done++) {
       clock += 1; // a row a millisecond: a second of checking
       report({ phase: 'checking', done, total: 1000 });
