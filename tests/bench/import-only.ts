@@ -50,6 +50,9 @@ export async function importOnly(trees: number, seasons: number): Promise<void> 
       `  bare prepared insert of the same rows ${f.floorMs.toFixed(0)} ms; import ÷ insert ${ratio(f.importMs, f.floorMs)}`,
     );
     console.log(
+      `  progress polled ${f.polls} times (every 500 ms), steps seen: ${f.steps.join(' → ') || 'none'}`,
+    );
+    console.log(
       `  GET /api/auth/csrf meanwhile: p50 ${f.trivial.p50.toFixed(1)} ms, p99 ${f.trivial.p99.toFixed(1)} ms, ${f.trivial.requests} requests; others used ${pct(f.busy.others)} of the cores`,
     );
   } finally {
