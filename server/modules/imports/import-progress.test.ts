@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { importProgressStore } from './import-progress';
+import { importProgressStore, MAX_PER_USER } from './import-progress';
 
 const at = { sugarbushId: 4, userId: 9, importId: '0b7c3f5e-8a7d-4c39-9d1e-2f4a6b8c0d12' };
 
@@ -23,5 +23,24 @@ describe("an import's kept progress", () => {
     store.start(at, { kind: 'trees', dryRun: true });
     expect(store.read(4, at.importId, 10)).toBeNull();
     expect(store.read(5, at.importId, 9)).toBeNull();
+  });
+});
+
+describe('imports one user runs at once', () => {
+  it('when a user has the most running, then one more is refused until one finishes', () => {
+    const store = importProgressStore();
+    const id = (i: number) => `0b7c3f5e-8a7d-4c39-9d1e-${String(i).padStart(12, '0')}`;
+    for (let i = 0; i < MAX_PER_USER; i++)
+      expect(store.start({ ...at, importId: id(i) }, { kind: 'trees', dryRun: true })).toBe(
+        'started',
+      );
+    expect(store.start({ ...at, importId: id(99) }, { kind: 'trees', dryRun: true })).toBe(
+      'too-many',
+    );
+    // Finished checks do not count: a user checking a file again and again is not refused.
+    store.finish(4, id(0), true);
+    expect(store.start({ ...at, importId: id(99) }, { kind: 'trees', dryRun: true })).toBe(
+      'started',
+    );
   });
 });

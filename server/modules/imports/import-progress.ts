@@ -3,7 +3,7 @@ import { importPhases } from '../../../shared/schemas/imports';
 
 /** How long a finished import's last state can still be read (the page's last poll). */
 export const KEEP_FINISHED_MS = 60_000;
-/** Imports one user may have on record in this process at once; a 429 beyond. */
+/** Imports one user may have running in this process at once; a 429 beyond. */
 export const MAX_PER_USER = 8;
 
 interface Entry extends ImportProgress {
@@ -36,8 +36,8 @@ export function importProgressStore() {
       const before = entries.get(key);
       if (before && !before.finished) return 'running';
       let mine = 0;
-      for (const e of entries.values()) if (e.userId === at.userId) mine++;
-      if (!before && mine >= MAX_PER_USER) return 'too-many';
+      for (const e of entries.values()) if (e.userId === at.userId && !e.finished) mine++;
+      if (mine >= MAX_PER_USER) return 'too-many';
       entries.set(key, {
         ...at,
         ...what,
