@@ -56,10 +56,11 @@ describe('reading a boundary file', () => {
     });
   });
 
-  it('when the KML, the GPX track and the Shapefiles hold the outline, then each gives the same outline and name', async () => {
+  it('when the KML, the KMZ, the GPX track and the Shapefiles hold the outline, then each gives the same outline and name', async () => {
     const wgs84 = outerRing(candidatesOf(await read('lantern-hollow.geojson'))[0].geometry);
     for (const file of [
       'lantern-hollow.kml',
+      'lantern-hollow.kmz',
       'lantern-hollow.gpx',
       'lantern-hollow-shp.zip',
       'lantern-hollow-utm18n-shp.zip',
@@ -72,6 +73,34 @@ describe('reading a boundary file', () => {
       for (const gap of [...cornerGaps(ring, wgs84), ...cornerGaps(wgs84, ring)])
         expect(gap, file).toBeLessThan(0.5);
     }
+  });
+
+  it('when a KMZ is renamed .zip, or names its KML otherwise than doc.kml, then the KML inside is still read', async () => {
+    const kmz = bytes('lantern-hollow.kmz');
+    const renamed = candidatesOf(await readBoundaryFile('outline.zip', kmz, { parseXml }));
+    expect(renamed[0].name).toBe('Lantern Hollow');
+    const unnamed = candidatesOf(await readBoundaryFile('outline', kmz, { parseXml }));
+    expect(unnamed[0].name).toBe('Lantern Hollow');
+    // The entry's name in the zip's directories, same length: "doc.kml" → "lot.kml".
+    const otherName = Buffer.from(
+      kmz.toString('latin1').replaceAll('doc.kml', 'lot.kml'),
+      'latin1',
+    );
+    expect(candidatesOf(await readBoundaryFile('b.kmz', otherName, { parseXml }))).toHaveLength(1);
+  });
+
+  it('when a .kmz is not a zip, or holds no KML, then the message says so', async () => {
+    expect(errorOf(await text('a.kmz', '<kml></kml>'))).toBe(
+      'The .kmz is damaged or not a zip file. Save it again as KMZ, or as KML.',
+    );
+    expect(errorOf(await text('a.kmz', 'PK not a zip'))).toMatch(/damaged or not a zip file/);
+    const noKml = Buffer.from(
+      bytes('lantern-hollow.kmz').toString('latin1').replaceAll('doc.kml', 'doc.txt'),
+      'latin1',
+    );
+    expect(errorOf(await readBoundaryFile('a.kmz', noKml, { parseXml }))).toBe(
+      'The .kmz holds no .kml file. Save the outline as KML or KMZ again.',
+    );
   });
 
   it('when the crs member names a system Clearwood does not know, then the file is refused naming it', async () => {

@@ -5,13 +5,14 @@ import {
   type FoundShape,
   type SkippedShape,
 } from './boundary-shapes';
+import { hasZipDirectory, isKml, kmlOfKmz, zipEntries, type ZipEntries } from './boundary-zip';
 import { readCrsMember, toWgs84 } from './crs';
 
 /**
  * Reads a stand's boundary from the files GIS programs and GPS units write: GeoJSON (in WGS 84,
- * or in a projected system its legacy `crs` member names), KML, GPX and a zipped Shapefile.
- * Pure: bytes in, outlines in WGS 84 out, in the browser and in node alike. The KML/GPX and
- * Shapefile readers are loaded only when such a file comes.
+ * or in a projected system its legacy `crs` member names), KML and KMZ (a zipped KML), GPX and
+ * a zipped Shapefile. Pure: bytes in, outlines in WGS 84 out, in the browser and in node alike.
+ * The KML/GPX, zip and Shapefile readers are loaded only when such a file comes.
  */
 export type BoundaryFileRead =
   | {
@@ -34,9 +35,16 @@ export interface ReadOptions {
 /** Larger than this and it is no stand outline (a county's parcels, a whole survey). */
 export const MAX_BOUNDARY_FILE_BYTES = 20 * 1024 * 1024;
 
-export const BOUNDARY_FILE_EXTENSIONS = ['.geojson', '.json', '.kml', '.gpx', '.zip'] as const;
+export const BOUNDARY_FILE_EXTENSIONS = [
+  '.geojson',
+  '.json',
+  '.kml',
+  '.kmz',
+  '.gpx',
+  '.zip',
+] as const;
 
-type Format = 'geojson' | 'kml' | 'gpx' | 'shapefile';
+type Format = 'geojson' | 'kml' | 'kmz' | 'gpx' | 'shapefile';
 type Found = { shapes: FoundShape[]; crs: string; layerName: string | null; degrees: boolean };
 
 const failure = (error: string) => ({ error });
@@ -58,8 +66,7 @@ function formatOf(name: string, bytes: Uint8Array, text: () => string): Format |
   if (ext === '.kml') return 'kml';
   if (ext === '.gpx') return 'gpx';
   if (ext === '.zip') return 'shapefile';
-  if (ext === '.kmz')
-    return failure('A .kmz is a zipped KML: unzip it and import the .kml inside.');
+  if (ext === '.kmz') return 'kmz';
   if (['.shp', '.shx', '.dbf', '.prj', '.cpg'].includes(ext))
     return failure(
       'A Shapefile is several files: zip the .shp together with its .shx, .dbf and .prj, and import the .zip.',
@@ -67,7 +74,7 @@ function formatOf(name: string, bytes: Uint8Array, text: () => string): Format |
   return (
     sniff(bytes, text) ??
     failure(
-      `Clearwood cannot read ${ext ? `a ${ext} file` : 'this file'} as a boundary. Choose a GeoJSON (.geojson, .json), KML, GPX, or a zipped Shapefile (.zip).`,
+      `Clearwood cannot read ${ext ? `a ${ext} file` : 'this file'} as a boundary. Choose a GeoJSON (.geojson, .json), KML or KMZ, GPX, or a zipped Shapefile (.zip).`,
     )
   );
 }
@@ -166,26 +173,29 @@ async function readXml(
   return { shapes, crs: 'CRS84', layerName: null, degrees: true };
 }
 
-/**
- * Whether the bytes end with a zip's end-of-central-directory record (in its last 64 KiB), as
- * every zip does. The unzipper shpjs uses never returns on bytes without one.
- */
-export function hasZipDirectory(bytes: Uint8Array): boolean {
-  const lowest = Math.max(0, bytes.length - 22 - 0xffff);
-  for (let i = bytes.length - 22; i >= lowest; i--)
-    if (
-      bytes[i] === 0x50 &&
-      bytes[i + 1] === 0x4b &&
-      bytes[i + 2] === 0x05 &&
-      bytes[i + 3] === 0x06
-    )
-      return true;
-  return false;
+async function readKmz(
+  bytes: Uint8Array,
+  parseXml: XmlParser | undefined,
+  entries?: ZipEntries,
+): Promise<Found | { error: string }> {
+  const kml = await kmlOfKmz(bytes, MAX_BOUNDARY_FILE_BYTES, entries);
+  return 'error' in kml ? kml : readXml(kml.text, 'kml', parseXml);
 }
 
-async function readShapefile(bytes: Uint8Array): Promise<Found | { error: string }> {
+async function readShapefile(
+  bytes: Uint8Array,
+  parseXml: XmlParser | undefined,
+): Promise<Found | { error: string }> {
   if (!hasZipDirectory(bytes))
     return failure('The .zip is damaged or not a zip file. Zip the Shapefile again and import it.');
+  // A KMZ renamed, or a KML zipped by hand: a zip with a .kml and no .shp is read as KMZ.
+  const entries = await zipEntries(bytes);
+  if (
+    entries &&
+    !entries.some((e) => /\.shp$/i.test(e.filename)) &&
+    entries.some((e) => isKml(e.filename))
+  )
+    return readKmz(bytes, parseXml, entries);
   const { default: shp } = await import('shpjs');
   let layers;
   try {
@@ -251,8 +261,10 @@ export async function readBoundaryFile(
     format === 'geojson'
       ? readGeoJson(text())
       : format === 'shapefile'
-        ? await readShapefile(data)
-        : await readXml(text(), format, options.parseXml);
+        ? await readShapefile(data, options.parseXml)
+        : format === 'kmz'
+          ? await readKmz(data, options.parseXml)
+          : await readXml(text(), format, options.parseXml);
   if ('error' in found) return found;
   const stray = found.degrees ? notDegrees(found.shapes) : null;
   if (stray)

@@ -157,12 +157,26 @@ const flag = z
 export const importQuerySchema = z.object({ dryRun: flag });
 export type ImportQuery = z.infer<typeof importQuerySchema>;
 
+/**
+ * The header `x-import-id`: a random id the browser makes for one import, under which the
+ * server keeps that import's progress while the POST is pending (`importProgressPath`).
+ */
+export const IMPORT_ID_HEADER = 'x-import-id';
+export const importIdSchema = z.uuid({ error: 'An import id is a UUID' });
+export const importProgressParamsSchema = z.object({ importId: importIdSchema });
+
 export interface ImportRowError {
-  /** The row as a spreadsheet numbers it: the header is row 1. */
+  /**
+   * CSV: the row as a spreadsheet numbers it (the header is row 1, where a problem of a column
+   * is reported). GPX: the waypoint's number in the file's order, from 1; 0 for a problem of the
+   * whole file (no column holds a field), which is about no waypoint.
+   */
   row: number;
   /** The column's header as in the file, or the field it lacks when no column holds it. */
   column: string | null;
   message: string;
+  /** GPX only: the waypoint's name as the file gives it ('' when it has none). */
+  waypoint?: string;
 }
 
 export interface ImportColumn {
@@ -193,10 +207,20 @@ export interface ImportResult {
   unchanged: number;
   /** Trees whose register entry was changed (only with `updateExisting`). */
   updated: number;
-  /** Empty when every row could be taken; when not, nothing was written. */
+  /**
+   * Empty when every row could be taken; when not, nothing was written. At most the problems of
+   * the first `REPORTED_ROWS` rows with one, in row order (`truncated` says when more were left out).
+   */
   errors: ImportRowError[];
-  /** Rows that can be imported but deserve a look (a tree far outside the boundary). */
+  /** Every problem found (one per cell, or per row where the row itself is wrong), reported or not. */
+  totalErrors: number;
+  /** Rows (or waypoints) with at least one problem, reported or not. */
+  rowsWithErrors: number;
+  /** Rows that can be imported but deserve a look (a tree far outside the boundary), capped as `errors`. */
   warnings: ImportRowError[];
+  totalWarnings: number;
+  /** `errors` or `warnings` holds only the first `REPORTED_ROWS` rows' entries. */
+  truncated: boolean;
   /** The species and status given to rows that name none, as the mapping stated them. */
   defaults: { species: string | null; status: string };
   columns: ImportColumn[];
@@ -206,3 +230,50 @@ export interface ImportResult {
 
 /** Data rows a report shows as they were read. */
 export const PREVIEW_ROWS = 5;
+
+/**
+ * Rows whose problems a report lists: a file of 10,000 wrong rows answers the first 200 rows'
+ * problems and the counts of all, not a list no one reads that weighs megabytes.
+ */
+export const REPORTED_ROWS = 200;
+
+/**
+ * The steps of an import, in order: the file arriving (the browser counts its bytes), read,
+ * each row checked, written (not in a dry run), the advice brought up to date, then done — or
+ * failed at any step (the POST's answer says why).
+ */
+export const importPhases = [
+  'receiving',
+  'reading',
+  'checking',
+  'writing',
+  'advising',
+  'done',
+  'failed',
+] as const;
+export type ImportPhase = (typeof importPhases)[number];
+
+/** `GET /api/sugarbushes/:id/imports/:importId/progress`, while the import's POST is pending. */
+export interface ImportProgress {
+  importId: string;
+  kind: ImportKind;
+  dryRun: boolean;
+  phase: ImportPhase;
+  /**
+   * How far the phase has come: rows checked or written, seasons advised, each of `total`; both
+   * 0 where a phase is not counted (receiving, reading). Never goes back within a phase.
+   */
+  done: number;
+  total: number;
+}
+
+/** What a step is called on the page. */
+export const importPhaseLabels: Record<ImportPhase, string> = {
+  receiving: 'Sending the file',
+  reading: 'Reading the file',
+  checking: 'Checking rows',
+  writing: 'Writing rows',
+  advising: 'Bringing the advice up to date',
+  done: 'Done',
+  failed: 'Stopped',
+};

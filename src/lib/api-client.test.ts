@@ -54,3 +54,45 @@ describe('the API client', () => {
     expect(vi.mocked(fetch).mock.calls[0][1]?.credentials).toBe('same-origin');
   });
 });
+
+describe('a form sent with its upload followed', () => {
+  it('when a file is posted with upload progress, then the bytes sent are told, and the token, headers and answer are as for any request', async () => {
+    const server = mockApi({
+      'POST /api/uploads': (() => ({ status: 201, body: { id: 7 } })) satisfies Handler,
+    });
+    const form = new FormData();
+    form.append('file', new File(['x'.repeat(1000)], 'a.csv'));
+    const told: [number, number][] = [];
+    const answer = await api.postForm('/uploads', form, {
+      headers: { 'x-import-id': 'id-1' },
+      onUploadProgress: (sent, total) => told.push([sent, total]),
+    });
+    expect(answer).toEqual({ id: 7 });
+    expect(told).toEqual([
+      [500, 1000],
+      [1000, 1000],
+    ]);
+    const [sent] = server.to('POST /api/uploads');
+    expect(sent.headers.get('x-csrf-token')).toBe('token-1');
+    expect(sent.headers.get('x-import-id')).toBe('id-1');
+    // The upload went by XMLHttpRequest, not fetch (which cannot tell its bytes).
+    expect(vi.mocked(fetch).mock.calls.map((c) => String(c[0]))).toEqual(['/api/auth/csrf']);
+  });
+
+  it('when the answer is an error, then it is the same ApiError as by fetch', async () => {
+    mockApi({
+      'POST /api/uploads': (() => ({
+        status: 422,
+        body: { error: { code: 'rows-rejected', message: '2 rows need attention' } },
+      })) satisfies Handler,
+    });
+    const error = await api
+      .postForm('/uploads', new FormData(), { onUploadProgress: () => undefined })
+      .catch((e: unknown) => e);
+    expect(error).toMatchObject({
+      status: 422,
+      code: 'rows-rejected',
+      message: '2 rows need attention',
+    });
+  });
+});

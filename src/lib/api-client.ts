@@ -23,7 +23,64 @@ export interface RequestOptions {
   body?: unknown;
   query?: Record<string, QueryValue>;
   signal?: AbortSignal;
+  /** More request headers (an import's id). */
+  headers?: Record<string, string>;
+  /**
+   * Bytes of the body sent so far, of all. `fetch` cannot tell, so such a request goes by
+   * XMLHttpRequest; everything else about it (CSRF, errors, the retry) is the same.
+   */
+  onUploadProgress?: (sent: number, total: number) => void;
 }
+
+/** What `send` needs of a request, whichever way it goes. */
+interface Outgoing {
+  method: Method;
+  url: string;
+  headers: Record<string, string>;
+  body: BodyInit | undefined;
+  signal?: AbortSignal;
+  onUploadProgress?: RequestOptions['onUploadProgress'];
+}
+
+const abortError = () => new DOMException('The request was aborted', 'AbortError');
+
+/** A request by XMLHttpRequest, for its upload events, answered as a fetch `Response`. */
+function sendByXhr(out: Outgoing): Promise<Response> {
+  return new Promise((resolve, reject) => {
+    if (out.signal?.aborted) return reject(abortError());
+    const xhr = new XMLHttpRequest();
+    xhr.open(out.method, out.url);
+    for (const [name, value] of Object.entries(out.headers)) xhr.setRequestHeader(name, value);
+    xhr.upload.addEventListener('progress', (e) => {
+      if (e.lengthComputable) out.onUploadProgress?.(e.loaded, e.total);
+    });
+    const onAbort = () => xhr.abort();
+    out.signal?.addEventListener('abort', onAbort, { once: true });
+    xhr.addEventListener('loadend', () => out.signal?.removeEventListener('abort', onAbort));
+    xhr.addEventListener('load', () => {
+      const headers = new Headers();
+      const type = xhr.getResponseHeader('Content-Type');
+      if (type) headers.set('Content-Type', type);
+      const empty = xhr.status === 204 || xhr.status === 205 || xhr.status === 304;
+      resolve(new Response(empty ? null : xhr.responseText, { status: xhr.status, headers }));
+    });
+    xhr.addEventListener('error', () => reject(new TypeError('Network request failed')));
+    xhr.addEventListener('timeout', () => reject(new TypeError('Network request timed out')));
+    xhr.addEventListener('abort', () => reject(abortError()));
+    xhr.send((out.body ?? null) as XMLHttpRequestBodyInit | null);
+  });
+}
+
+const send = (out: Outgoing): Promise<Response> =>
+  out.onUploadProgress
+    ? sendByXhr(out)
+    : fetch(out.url, {
+        method: out.method,
+        headers: out.headers,
+        body: out.body,
+        credentials: 'same-origin',
+        signal: out.signal,
+      });
 
 // The CSRF token belongs to the session. Login regenerates the session and logout ends it,
 // so both call `resetCsrfToken()`; the next state-changing request fetches a fresh one.
@@ -80,7 +137,7 @@ async function toApiError(response: Response): Promise<ApiError> {
 
 async function request<T>(path: string, options: RequestOptions = {}, retried = false): Promise<T> {
   const method = options.method ?? 'GET';
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { ...options.headers, Accept: 'application/json' };
   // A form (a file upload) sets its own multipart type and boundary.
   const form = options.body instanceof FormData ? options.body : undefined;
   if (options.body !== undefined && !form) headers['Content-Type'] = 'application/json';
@@ -88,12 +145,13 @@ async function request<T>(path: string, options: RequestOptions = {}, retried = 
 
   let response: Response;
   try {
-    response = await fetch(buildUrl(path, options.query), {
+    response = await send({
       method,
+      url: buildUrl(path, options.query),
       headers,
       body: form ?? (options.body === undefined ? undefined : JSON.stringify(options.body)),
-      credentials: 'same-origin',
       signal: options.signal,
+      onUploadProgress: options.onUploadProgress,
     });
   } catch (error) {
     if ((error as { name?: string }).name === 'AbortError') throw error;
@@ -122,7 +180,11 @@ export const api = {
     request<T>(path, { ...options, method: 'GET' }),
   post: <T>(path: string, body?: unknown) => request<T>(path, { method: 'POST', body }),
   patch: <T>(path: string, body?: unknown) => request<T>(path, { method: 'PATCH', body }),
-  /** A multipart form, such as a photo in the field `file`. */
-  postForm: <T>(path: string, form: FormData) => request<T>(path, { method: 'POST', body: form }),
+  /** A multipart form, such as a photo in the field `file`; `upload` follows its bytes. */
+  postForm: <T>(
+    path: string,
+    form: FormData,
+    upload?: Pick<RequestOptions, 'headers' | 'onUploadProgress' | 'signal'>,
+  ) => request<T>(path, { ...upload, method: 'POST', body: form }),
   delete: <T>(path: string) => request<T>(path, { method: 'DELETE' }),
 };

@@ -53,12 +53,13 @@ const treesOf = () =>
 const sugarMaples = { defaults: { species: 'sugar-maple' } };
 
 describe('importing trees from a GPS file of waypoints', () => {
-  it('when no species is stated, then the report asks for one and nothing is guessed', async () => {
+  it('when no species is stated, then the report asks for one of the whole file, not of waypoint 1, and nothing is guessed', async () => {
     const res = await upload(gpx, { dryRun: true });
     expect(res.status).toBe(200);
     expect(res.body.source).toBe('gpx');
+    // A GPX has no header row: row 0 is the whole file, and no waypoint is named.
     expect(res.body.errors).toEqual([
-      { row: 1, column: 'species', message: expect.stringMatching(/species/) },
+      { row: 0, column: 'species', message: expect.stringMatching(/species/) },
     ]);
     expect(await treesOf()).toHaveLength(0);
   });
@@ -74,7 +75,12 @@ describe('importing trees from a GPS file of waypoints', () => {
     expect(res.body.preview[0][desc]).toBe('Sugar maple by the brook');
     // GX-105 is ~22 m past the line (a GPS under a canopy strays so): only GX-106 is flagged.
     expect(res.body.warnings).toEqual([
-      { row: 6, column: 'lat', message: expect.stringMatching(/GX-106 lies about \d+ m outside/) },
+      {
+        row: 6,
+        waypoint: 'GX-106',
+        column: 'lat',
+        message: expect.stringMatching(/GX-106 lies about \d+ m outside/),
+      },
     ]);
     expect(await treesOf()).toHaveLength(0);
   });
@@ -108,6 +114,27 @@ describe('importing trees from a GPS file of waypoints', () => {
     expect(again.status).toBe(200);
     expect(again.body).toMatchObject({ created: 0, unchanged: 6, errors: [] });
     expect(await treesOf()).toHaveLength(6);
+  });
+
+  it('when waypoints are wrong, then each problem names the waypoint by its number in the file and its name', async () => {
+    const wpt = (lat: string, name: string | null) =>
+      `<wpt lat="${lat}" lon="-72.5">${name === null ? '' : `<name>${name}</name>`}</wpt>`;
+    const file = Buffer.from(
+      `<?xml version="1.0"?><gpx version="1.1">${[
+        wpt('45.001', 'GW-1'),
+        wpt('45.001', null),
+        wpt('95.5', 'GW-3'),
+        wpt('45.001', 'GW-1'),
+      ].join('')}</gpx>`,
+    );
+    // GW-1 again with another position would be a repeat; here it is the same, so not a problem.
+    const res = await upload(file, { dryRun: true, mapping: sugarMaples });
+    expect(res.status).toBe(200);
+    expect(res.body.errors).toEqual([
+      { row: 2, waypoint: '', column: 'name', message: expect.any(String) },
+      { row: 3, waypoint: 'GW-3', column: 'lat', message: expect.any(String) },
+    ]);
+    expect(res.body).toMatchObject({ totalErrors: 2, rowsWithErrors: 2, unchanged: 1 });
   });
 
   it('when the GPX is cut off mid-element, then 400 says it is not well-formed and where', async () => {

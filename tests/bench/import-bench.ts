@@ -1,8 +1,10 @@
 /**
  * A CSV import of 10,000 trees through HTTP, beside its floor — a bare prepared insert of the same
  * rows into a copy of the same file, one transaction, no checks — and the trivial route at 20
- * connections while the import runs (parsing in a worker, batched writes, the new trees advised).
+ * connections while the import runs (parsing in a worker, batched writes, the new trees advised),
+ * its progress polled every 500 ms as the import page does.
  */
+import { randomUUID } from 'node:crypto';
 import fs from 'node:fs';
 import { performance } from 'node:perf_hooks';
 import Database from 'better-sqlite3';
@@ -24,6 +26,37 @@ export interface ImportFigures {
   floorMs: number;
   trivial: LoadFigures;
   busy: BusyWindow;
+  /** Progress polls answered while the POST was pending, and the steps they saw in order. */
+  polls: number;
+  steps: string[];
+}
+
+/** Poll the import's progress as the page does until `until` settles; the steps seen. */
+async function pollProgress(
+  s: Session,
+  standId: number,
+  importId: string,
+  until: Promise<unknown>,
+) {
+  let settled = false;
+  void until.finally(() => (settled = true));
+  const steps: string[] = [];
+  let polls = 0;
+  while (!settled) {
+    const res = await fetch(
+      `${s.baseUrl}/api/sugarbushes/${standId}/imports/${importId}/progress`,
+      {
+        headers: { cookie: s.cookie },
+      },
+    );
+    if (res.ok) {
+      polls++;
+      const { phase } = (await res.json()) as { phase: string };
+      if (steps.at(-1) !== phase) steps.push(phase);
+    }
+    await new Promise((resolve) => setTimeout(resolve, 500));
+  }
+  return { polls, steps };
 }
 
 interface Row {
@@ -79,10 +112,11 @@ export async function importBench(
   const window = busyWindow();
   const form = new FormData();
   form.append('file', new Blob([text], { type: 'text/csv' }), 'trees.csv');
+  const importId = randomUUID();
   const t0 = performance.now();
   const posted = fetch(`${s.baseUrl}/api/sugarbushes/${standId}/imports/trees`, {
     method: 'POST',
-    headers: { cookie: s.cookie, 'x-csrf-token': s.csrf },
+    headers: { cookie: s.cookie, 'x-csrf-token': s.csrf, 'x-import-id': importId },
     body: form,
     signal: AbortSignal.timeout(CAP_SECONDS * 1000),
   }).then(async (res) => ({
@@ -90,6 +124,7 @@ export async function importBench(
     body: (await res.json()) as { created?: number },
     ms: performance.now() - t0,
   }));
+  const polled = pollProgress(s, standId, importId, posted);
   const trivial = await load(s, {
     connections: CONNECTIONS,
     seconds: CAP_SECONDS,
@@ -98,6 +133,7 @@ export async function importBench(
     until: posted,
   });
   const answer = await posted;
+  const { polls, steps } = await polled;
   if (answer.status >= 300)
     throw new Error(`The import answered ${answer.status}: ${JSON.stringify(answer.body)}`);
   return {
@@ -109,5 +145,7 @@ export async function importBench(
     floorMs,
     trivial,
     busy: window.end(),
+    polls,
+    steps,
   };
 }

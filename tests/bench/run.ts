@@ -6,6 +6,8 @@
  *   BENCH_TREES=20000,100000   stands to measure      BENCH_MAP=0        skip the browser
  *   BENCH_MAP_RUNS=2           page loads per stand   BENCH_LOAD_SECONDS=4  per autocannon run
  *   BENCH_WRITE_DOC=0          print only, leave docs/benchmarks.md as it is
+ *   BENCH_ONLY=import          only the 10,000-row import (and the trivial route meanwhile) for
+ *                              each stand, no build, no browser, printed only
  */
 import fs from 'node:fs';
 import os from 'node:os';
@@ -16,6 +18,7 @@ import { upcomingSeason } from '../../shared/schemas/plan';
 import { launchBrowser } from '../e2e/harness';
 import { bundleFigures, ensureClientBuilt, type BundleFigures } from './bundle';
 import { importBench, IMPORT_ROWS } from './import-bench';
+import { importOnly } from './import-only';
 import { busyWindow, machineInfo, pct } from './machine';
 import { measureMap } from './map-draw';
 import { readStand, standSettings, timePlanStand } from './plan-floor';
@@ -38,6 +41,11 @@ const SEASON = upcomingSeason();
 const MAP = process.env.BENCH_MAP !== '0';
 const MAP_RUNS = Math.max(1, Number(process.env.BENCH_MAP_RUNS ?? 2) || 1);
 const OTHER_PROFILE = 'traditional';
+const ONLY = process.env.BENCH_ONLY ?? '';
+if (ONLY !== '' && ONLY !== 'import') {
+  console.error(`BENCH_ONLY must be "import" (or unset), not "${ONLY}"`);
+  process.exit(2);
+}
 const SAMPLE_TREES = 200;
 const MEASURED_TREES = 10;
 
@@ -197,6 +205,10 @@ export const median = (xs: readonly number[]) => {
 };
 
 async function main() {
+  if (ONLY === 'import') {
+    for (const trees of STANDS) await importOnly(trees, SEASONS);
+    return;
+  }
   const started = performance.now();
   const machine = machineInfo();
   const whole = busyWindow();

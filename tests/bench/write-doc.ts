@@ -336,7 +336,7 @@ export function writeDoc(run: RunFigures): string {
 
   r.heading('A CSV import of 10,000 trees');
   r.para(
-    `\`tests/bench/import-bench.ts\`: ${IMPORT_ROWS.toLocaleString('en-US')} new trees posted as one CSV file to \`POST /api/sugarbushes/:id/imports/trees\` (read and checked in a worker, matched by tag, written in batches in one transaction, the new trees advised by the worker pool before the answer), beside a bare prepared insert of the same rows in one transaction on a copy of the same file; autocannon runs on the trivial route until the import answers.\n`,
+    `\`tests/bench/import-bench.ts\`: ${IMPORT_ROWS.toLocaleString('en-US')} new trees posted as one CSV file to \`POST /api/sugarbushes/:id/imports/trees\` (read and checked in a worker, matched by tag, written in batches in one transaction, the new trees advised by the worker pool before the answer; its progress polled every 500 ms as the import page does), beside a bare prepared insert of the same rows in one transaction on a copy of the same file; autocannon runs on the trivial route until the import answers.\n`,
   );
   r.table(
     [

@@ -1,4 +1,5 @@
 import os from 'node:os';
+import { MessageChannel, type MessagePort } from 'node:worker_threads';
 import type { Knex } from 'knex';
 import { Piscina } from 'piscina';
 import type { DatabaseTarget } from '../../config';
@@ -13,6 +14,7 @@ import type { TrendResult } from '../trends/stand-trends';
 import type { AdviceTask, PreviewGuideline } from './advice-worker-tasks';
 import type { IssuedPlanTask } from '../issued-plans/issued-plan-tasks';
 import type { ImportOutcome, ImportTask } from '../imports/run-import';
+import type { ProgressStep } from '../imports/import-progress';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
 const CHUNK = 500;
@@ -28,6 +30,8 @@ export interface AdviceJobs {
   /** Resolves with the guideline version whose rows are complete for the season, once they are. */
   ensure(sugarbushId: number, season: number, opts?: { recheck?: boolean }): Promise<number>;
   status(sugarbushId: number, season: number): Promise<AdviceStatus>;
+  /** Trees advised of those stale, of the job this process runs for the season now; null if none. */
+  running(sugarbushId: number, season: number): { done: number; total: number } | null;
   /** Whole-stand reads of the stored rows, in a worker: the season's totals … */
   totals(sugarbushId: number, season: number, standVersion: number): Promise<PlanTotals>;
   /** … and the ids of the rows a filter keeps, in a sort's order. */
@@ -60,8 +64,11 @@ export interface AdviceJobs {
   ): Promise<TrendResult>;
   /** Issuing a plan and reading the issued copy against the stand, in a worker. */
   issuedPlan<T>(task: IssuedPlanTask): Promise<T>;
-  /** An import, whole, in a worker with its own connection (`runImport`). */
-  importFile(t: ImportTask): Promise<ImportOutcome>;
+  /**
+   * An import, whole, in a worker with its own connection (`runImport`); its steps come back
+   * through a message port to `onStep` on this thread.
+   */
+  importFile(t: ImportTask, onStep?: (step: ProgressStep) => void): Promise<ImportOutcome>;
   close(): Promise<void>;
 }
 
@@ -86,7 +93,8 @@ export function createAdviceJobs(opts: {
       maxThreads: Math.max(1, os.availableParallelism() - 1),
       idleTimeout: 15_000,
     }));
-  const task = <T>(t: TaskInput) => workers().run({ ...t, database } as AdviceTask) as Promise<T>;
+  const task = <T>(t: TaskInput, transferList?: MessagePort[]) =>
+    workers().run({ ...t, database } as AdviceTask, { transferList }) as Promise<T>;
 
   async function adviceVersion(sugarbushId: number): Promise<number> {
     const row = await db('sugarbushes').where({ id: sugarbushId }).first('advice_version');
@@ -118,7 +126,9 @@ export function createAdviceJobs(opts: {
         for (let i = 0; i < stale.length; i += CHUNK) chunks.push(stale.slice(i, i + CHUNK));
         await Promise.all(
           chunks.map(async (treeIds) => {
-            job.done += await task<number>({ kind: 'advise', sugarbushId, season, treeIds });
+            // Not `job.done += await …`: that reads `done` before the wait and loses the others.
+            const advised = await task<number>({ kind: 'advise', sugarbushId, season, treeIds });
+            job.done += advised;
           }),
         );
       }
@@ -163,6 +173,11 @@ export function createAdviceJobs(opts: {
       job.promise = run(sugarbushId, season, job).finally(() => running.delete(key));
       running.set(key, job);
       return job.promise;
+    },
+
+    running(sugarbushId, season) {
+      const job = running.get(`${sugarbushId}:${season}`);
+      return job ? { done: job.done, total: job.total } : null;
     },
 
     async status(sugarbushId, season) {
@@ -215,8 +230,15 @@ export function createAdviceJobs(opts: {
       return task<T>({ kind: 'issued-plan', task: t });
     },
 
-    importFile(t) {
-      return task<ImportOutcome>({ kind: 'import', ...t });
+    async importFile(t, onStep) {
+      if (!onStep) return task<ImportOutcome>({ kind: 'import', ...t });
+      const { port1, port2 } = new MessageChannel();
+      port1.on('message', (step: ProgressStep) => onStep(step));
+      try {
+        return await task<ImportOutcome>({ kind: 'import', ...t, progress: port2 }, [port2]);
+      } finally {
+        port1.close();
+      }
     },
 
     async close() {

@@ -1,3 +1,4 @@
+import type { MessagePort } from 'node:worker_threads';
 import type { Knex } from 'knex';
 import type { DatabaseTarget } from '../../config';
 import { openDb } from '../../db';
@@ -9,6 +10,7 @@ import {
   type GuidelineChoice,
 } from '../compliance/compliance-task';
 import { runImport, type ImportOutcome, type ImportTask } from '../imports/run-import';
+import { throttled } from '../imports/progress-throttle';
 import { diffPlans } from '../plans/plan-diff';
 import { loadStandTrees } from '../plans/plans.repository';
 import type { TrendResult } from '../trends/stand-trends';
@@ -44,8 +46,11 @@ export type AdviceTask =
   | (OnStand & { kind: 'preview'; standVersion: number; guideline: PreviewGuideline })
   /** Every tree tapped in the season, held against each guideline (not stored). */
   | (OnStand & { kind: 'compliance'; guidelines: GuidelineChoice[] })
-  /** A CSV or GPX file read, checked, matched and (all rows or none) written. */
-  | (ImportTask & { kind: 'import'; database: DatabaseTarget })
+  /**
+   * A CSV or GPX file read, checked, matched and (all rows or none) written; its steps posted
+   * to `progress` (throttled), which the request thread only stores.
+   */
+  | (ImportTask & { kind: 'import'; database: DatabaseTarget; progress?: MessagePort })
   /** Seasons with a measurement or a taphole of the stand on record. */
   | (Omit<OnStand, 'season'> & { kind: 'recorded-seasons' })
   /** Issuing a plan, and what reads the issued copy against the whole stand. */
@@ -93,7 +98,18 @@ export async function runAdviceTask(
   | Awaited<ReturnType<typeof runIssuedPlanTask>>
 > {
   const db = dbFor(task.database);
-  if (task.kind === 'import') return runImport(db, task);
+  if (task.kind === 'import') {
+    const { progress, ...work } = task;
+    try {
+      return await runImport(
+        db,
+        work,
+        progress ? throttled((step) => progress.postMessage(step)) : undefined,
+      );
+    } finally {
+      progress?.close();
+    }
+  }
   if (task.kind === 'issued-plan') return runIssuedPlanTask(db, task.task);
   if (task.kind === 'recorded-seasons')
     return trendsRepository(db).recordedSeasons(task.sugarbushId);

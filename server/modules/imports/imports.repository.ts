@@ -14,6 +14,9 @@ export function chunks<T>(xs: readonly T[], size = BATCH): T[][] {
 /** Let other requests' callbacks run between two statements of a long write. */
 const breathe = () => new Promise<void>((resolve) => setImmediate(resolve));
 
+/** Told the rows written so far, after each batch. */
+type Written = (rows: number) => void;
+
 export interface StoredTree {
   id: number;
   tag: string;
@@ -103,7 +106,11 @@ export function importsRepository(db: Knex) {
     },
 
     /** Insert the trees; their new ids. */
-    async insertTrees(sugarbushId: number, rows: readonly TreeRow[]): Promise<number[]> {
+    async insertTrees(
+      sugarbushId: number,
+      rows: readonly TreeRow[],
+      written: Written = () => undefined,
+    ): Promise<number[]> {
       const ids: number[] = [];
       for (const part of chunks(rows)) {
         const made: { id: number }[] = await db('trees')
@@ -119,6 +126,7 @@ export function importsRepository(db: Knex) {
           )
           .returning(['id']);
         for (const m of made) ids.push(Number(m.id));
+        written(ids.length);
         await breathe();
       }
       return ids;
@@ -137,7 +145,9 @@ export function importsRepository(db: Knex) {
     async insertMeasurements(
       rows: readonly (MeasurementRow & { treeId: number })[],
       userId: number,
+      written: Written = () => undefined,
     ): Promise<void> {
+      let n = 0;
       for (const part of chunks(rows)) {
         await db('measurements').insert(
           part.map((r) => ({
@@ -150,6 +160,7 @@ export function importsRepository(db: Knex) {
             recorded_by: userId,
           })),
         );
+        written((n += part.length));
         await breathe();
       }
     },
@@ -157,7 +168,9 @@ export function importsRepository(db: Knex) {
     async insertTapholes(
       rows: readonly (TapholeRow & { treeId: number })[],
       userId: number,
+      written: Written = () => undefined,
     ): Promise<void> {
+      let n = 0;
       for (const part of chunks(rows)) {
         await db('tapholes').insert(
           part.map((r) => ({
@@ -171,6 +184,7 @@ export function importsRepository(db: Knex) {
             recorded_by: userId,
           })),
         );
+        written((n += part.length));
         await breathe();
       }
     },

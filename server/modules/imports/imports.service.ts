@@ -8,6 +8,8 @@ import {
   type ImportMapping,
   type ImportResult,
 } from '../../../shared/schemas/imports';
+import type { ProgressStep } from './import-progress';
+import { PROGRESS_EVERY_MS } from './progress-throttle';
 
 /** The form field `mapping`: JSON, checked by the shared schema; absent means "as the headers say". */
 export function readMapping(raw: unknown): ImportMapping {
@@ -44,21 +46,40 @@ export function importsService(ctx: AppContext) {
       bytes: Uint8Array,
       mapping: ImportMapping,
       dryRun: boolean,
+      /** Each step as the worker reports it; this thread only passes it on. */
+      step: (s: ProgressStep) => void = () => undefined,
     ): Promise<ImportResult> {
-      const outcome = await ctx.advice.importFile({
-        of: kind,
-        bytes,
-        mapping,
-        dryRun,
-        sugarbushId: access.sugarbushId,
-        userId: access.userId,
-      });
+      const outcome = await ctx.advice.importFile(
+        {
+          of: kind,
+          bytes,
+          mapping,
+          dryRun,
+          sugarbushId: access.sugarbushId,
+          userId: access.userId,
+        },
+        step,
+      );
       if ('fatal' in outcome)
         throw new AppError(400, 'invalid-input', outcome.fatal, { file: outcome.fatal });
       // Many trees changed: the workers re-advise them before the answer, as a single write's
       // answer waits for its tree's advice.
-      for (const season of outcome.seasons)
-        await ctx.advice.ensure(access.sugarbushId, season, { recheck: true });
+      // Progress counts each changed tree once a season (a season's job may find a few more).
+      const { seasons, trees } = outcome;
+      const total = seasons.length * trees;
+      for (const [i, season] of seasons.entries()) {
+        const report = () => {
+          const job = ctx.advice.running(access.sugarbushId, season);
+          step({ phase: 'advising', done: i * trees + Math.min(job?.done ?? 0, trees), total });
+        };
+        report();
+        const timer = setInterval(report, PROGRESS_EVERY_MS);
+        try {
+          await ctx.advice.ensure(access.sugarbushId, season, { recheck: true });
+        } finally {
+          clearInterval(timer);
+        }
+      }
       return outcome.result;
     },
   };

@@ -61,6 +61,8 @@ export interface ReadRows<R extends ImportRow = ImportRow> {
   repeats: number;
   errors: ImportRowError[];
   warnings: ImportRowError[];
+  /** GPX: each waypoint's name as the file gives it, by its number (1 is the first). */
+  waypoints?: string[];
 }
 
 /** Fields that may be left empty (an empty cell is null, not a missing value). */
@@ -109,6 +111,8 @@ export function readRows(
   bytes: Uint8Array,
   given: ImportMapping,
   boundary: Boundary | null = null,
+  /** Called as each data row is checked: rows done of the file's rows (blank ones included). */
+  onRow?: (done: number, total: number) => void,
 ): ReadRows {
   const empty = {
     columns: [],
@@ -136,7 +140,11 @@ export function readRows(
     mapping = { ...given, columns: { ...gpxColumns, ...given.columns } };
   } else table = readCsv(bytes);
   if (table.error) return { ...empty, source, errors: [table.error] };
-  const { columns, index, errors } = resolveColumns(kind, table.header, mapping);
+  const resolved = resolveColumns(kind, table.header, mapping);
+  const { columns, index } = resolved;
+  // A GPX has no header row: a problem of a column is about the whole file, no waypoint.
+  const errors =
+    source === 'gpx' ? resolved.errors.map((e) => ({ ...e, row: 0 })) : resolved.errors;
   const preview = table.records
     .filter((r) => r.cells.some((c) => c !== ''))
     .slice(0, PREVIEW_ROWS)
@@ -150,6 +158,7 @@ export function readRows(
     repeats: 0,
     errors,
     warnings: [],
+    ...(source === 'gpx' ? { waypoints: table.records.map((r) => r.cells[0] ?? '') } : {}),
   };
   if (errors.length > 0) {
     out.rows = table.records.filter((r) => r.cells.some((c) => c !== '')).length;
@@ -158,7 +167,9 @@ export function readRows(
   const headerOf = (field: ImportField) => table.header[index.get(field)!];
   const seen = new Map<string, { row: number; json: string }>();
 
-  for (const { row, cells } of table.records) {
+  const total = table.records.length;
+  for (const [i, { row, cells }] of table.records.entries()) {
+    onRow?.(i + 1, total);
     if (cells.every((c) => c === '')) continue;
     out.rows++;
     const rowErrors: ImportRowError[] = [];
@@ -238,7 +249,7 @@ export function readRows(
         out.errors.push({
           row,
           column: headerOf('tag'),
-          message: `Row ${before.row} has the same ${sameWhat[kind]} with other values`,
+          message: `${source === 'gpx' ? 'Waypoint' : 'Row'} ${before.row} has the same ${sameWhat[kind]} with other values`,
         });
       continue;
     }

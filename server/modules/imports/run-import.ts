@@ -1,8 +1,10 @@
 import type { Knex } from 'knex';
 import {
+  REPORTED_ROWS,
   type ImportKind,
   type ImportMapping,
   type ImportResult,
+  type ImportRowError,
 } from '../../../shared/schemas/imports';
 import { auditRepository } from '../audit/audit.repository';
 import { mapRepository } from '../map/map.repository';
@@ -16,6 +18,7 @@ import {
   type TapholeRow,
   type TreeRow,
 } from './read-rows';
+import type { ProgressStep } from './import-progress';
 import { recordsImported } from './records-imported';
 
 const auditEntity: Record<ImportKind, string> = {
@@ -37,7 +40,9 @@ export interface ImportTask {
  * What an import answers: the report, or a file that cannot be read at all (`fatal`, a 400), and
  * the seasons whose advice the caller brings current after the commit.
  */
-export type ImportOutcome = { fatal: string } | { result: ImportResult; seasons: number[] };
+export type ImportOutcome =
+  | { fatal: string }
+  | { result: ImportResult; seasons: number[]; /** Trees whose record changed. */ trees: number };
 
 /**
  * One import, whole, in a worker thread with its own connection: read and checked, matched
@@ -46,10 +51,17 @@ export type ImportOutcome = { fatal: string } | { result: ImportResult; seasons:
  * writes stall no other request, and on SQLite the server's one connection stays free for them
  * (readers go on beside the write; WAL).
  */
-export async function runImport(db: Knex, task: ImportTask): Promise<ImportOutcome> {
+export async function runImport(
+  db: Knex,
+  task: ImportTask,
+  step: (s: ProgressStep) => void = () => undefined,
+): Promise<ImportOutcome> {
   const { of: kind, bytes, mapping, dryRun, sugarbushId, userId } = task;
+  step({ phase: 'reading', done: 0, total: 0 });
   const boundary = kind === 'trees' ? await mapRepository(db).boundary(sugarbushId) : null;
-  const read = readRows(kind, bytes, mapping, boundary);
+  const read = readRows(kind, bytes, mapping, boundary, (done, total) =>
+    step({ phase: 'checking', done, total }),
+  );
   if (read.fatal) return { fatal: read.fatal };
   const result: ImportResult = {
     kind,
@@ -60,7 +72,11 @@ export async function runImport(db: Knex, task: ImportTask): Promise<ImportOutco
     unchanged: read.repeats,
     updated: 0,
     errors: read.errors,
+    totalErrors: 0,
+    rowsWithErrors: 0,
     warnings: read.warnings,
+    totalWarnings: 0,
+    truncated: false,
     defaults: {
       species: mapping.defaults.species ?? null,
       status: mapping.defaults.status ?? 'active',
@@ -68,8 +84,10 @@ export async function runImport(db: Knex, task: ImportTask): Promise<ImportOutco
     columns: read.columns,
     preview: read.preview,
   };
-  if (read.errors.length > 0 && read.records.length === 0) return { result, seasons: [] };
+  if (read.errors.length > 0 && read.records.length === 0)
+    return { result: capped(result, read.waypoints), seasons: [], trees: 0 };
 
+  let changed = 0;
   const seasons = await db.transaction(async (trx) => {
     const repo = importsRepository(trx);
     const trees = await repo.treesByTag(
@@ -84,17 +102,27 @@ export async function runImport(db: Knex, task: ImportTask): Promise<ImportOutco
     if (result.errors.length > 0 || dryRun) return [];
     if (matched.create.length + matched.update.length === 0) return [];
 
+    const total = matched.create.length + matched.update.length;
+    const written = (done: number) => step({ phase: 'writing', done, total });
+    written(0);
     let touched: number[];
     if (kind === 'trees') {
-      const made = await repo.insertTrees(sugarbushId, matched.create as TreeRow[]);
-      for (const r of matched.update as unknown as (TreeRow & { id: number })[])
+      const made = await repo.insertTrees(sugarbushId, matched.create as TreeRow[], written);
+      const updates = matched.update as unknown as (TreeRow & { id: number })[];
+      for (const [i, r] of updates.entries()) {
         await repo.updateTree(r.id, r);
+        written(made.length + i + 1);
+      }
       touched = [...made, ...matched.update.map((r) => r.id)];
     } else {
       const rows = matched.create as ((MeasurementRow | TapholeRow) & { treeId: number })[];
       if (kind === 'measurements')
-        await repo.insertMeasurements(rows as (MeasurementRow & { treeId: number })[], userId);
-      else await repo.insertTapholes(rows as (TapholeRow & { treeId: number })[], userId);
+        await repo.insertMeasurements(
+          rows as (MeasurementRow & { treeId: number })[],
+          userId,
+          written,
+        );
+      else await repo.insertTapholes(rows as (TapholeRow & { treeId: number })[], userId, written);
       touched = rows.map((r) => r.treeId);
     }
     await auditRepository(trx).record({
@@ -104,9 +132,47 @@ export async function runImport(db: Knex, task: ImportTask): Promise<ImportOutco
       entity: auditEntity[kind],
       detail: { rows: result.rows, created: result.created, updated: result.updated },
     });
+    changed = new Set(touched).size;
     return recordsImported(trx, sugarbushId, touched);
   });
-  return { result, seasons };
+  return { result: capped(result, read.waypoints), seasons, trees: changed };
+}
+
+/** Entries of the first `REPORTED_ROWS` rows that have one, in row order. */
+function firstRows(entries: readonly ImportRowError[]): ImportRowError[] {
+  const rows = new Set<number>();
+  const out: ImportRowError[] = [];
+  for (const e of entries) {
+    if (!rows.has(e.row)) {
+      if (rows.size === REPORTED_ROWS) break;
+      rows.add(e.row);
+    }
+    out.push(e);
+  }
+  return out;
+}
+
+/**
+ * The report as it crosses back to the request thread: every count, but the entries of the first
+ * `REPORTED_ROWS` rows only; a GPX entry names its waypoint.
+ */
+function capped(result: ImportResult, waypoints: string[] | undefined): ImportResult {
+  const byRow = (a: ImportRowError, b: ImportRowError) => a.row - b.row;
+  const named = (e: ImportRowError): ImportRowError =>
+    waypoints && e.row > 0 ? { ...e, waypoint: waypoints[e.row - 1] ?? '' } : e;
+  const errors = [...result.errors].sort(byRow);
+  const warnings = [...result.warnings].sort(byRow);
+  const shownErrors = firstRows(errors);
+  const shownWarnings = firstRows(warnings);
+  return {
+    ...result,
+    errors: shownErrors.map(named),
+    totalErrors: errors.length,
+    rowsWithErrors: new Set(errors.map((e) => e.row)).size,
+    warnings: shownWarnings.map(named),
+    totalWarnings: warnings.length,
+    truncated: shownErrors.length < errors.length || shownWarnings.length < warnings.length,
+  };
 }
 
 async function match(

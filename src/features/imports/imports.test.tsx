@@ -1,7 +1,8 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import type { Role } from '@shared/schemas/enums';
-import type { ImportResult } from '@shared/schemas/imports';
+import type { ImportProgress, ImportResult } from '@shared/schemas/imports';
 import { ImportsRoute } from '@/app/routes/imports';
+import { progressShown } from './components/import-progress';
 import { mockApi, type Handler } from '@/test/api-mock';
 import { meAs, sugarbush } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
@@ -18,7 +19,11 @@ const result = (over: Partial<ImportResult> = {}): ImportResult => ({
   unchanged: 0,
   updated: 0,
   errors: [],
+  totalErrors: over.errors?.length ?? 0,
+  rowsWithErrors: new Set(over.errors?.map((e) => e.row)).size,
   warnings: [],
+  totalWarnings: over.warnings?.length ?? 0,
+  truncated: false,
   defaults: { species: null, status: 'active' },
   columns: [
     { header: 'Tag', field: 'tag' },
@@ -107,9 +112,16 @@ describe('the import page', () => {
         created: species ? 2 : 0,
         errors: species
           ? []
-          : [{ row: 1, column: 'species', message: 'No column holds species: map one' }],
+          : [{ row: 0, column: 'species', message: 'No column holds species: map one' }],
         warnings: species
-          ? [{ row: 2, column: 'lat', message: 'Waypoint GX-2 lies about 480 m outside' }]
+          ? [
+              {
+                row: 2,
+                waypoint: 'GX-2',
+                column: 'lat',
+                message: 'Waypoint GX-2 lies about 480 m outside',
+              },
+            ]
           : [],
         defaults: { species, status: 'active' },
         columns: [
@@ -142,9 +154,129 @@ describe('the import page', () => {
     await user.click(screen.getByRole('button', { name: 'Check again' }));
     expect(sentMapping(api, TREES, 1).defaults).toEqual({ species: 'sugar-maple' });
     expect(
-      await screen.findByText(/Waypoint 2: Waypoint GX-2 lies about 480 m outside/),
+      await screen.findByText(/Waypoint 2 “GX-2”: Waypoint GX-2 lies about 480 m outside/),
     ).toBeInTheDocument();
     expect(await screen.findByRole('button', { name: 'Import 2 rows' })).toBeEnabled();
+  });
+
+  it('when a large file is checked, then the upload and then the server’s steps show as a progress bar until the answer', async () => {
+    let answer: (reply: { status: number; body: unknown }) => void = () => undefined;
+    const pending = new Promise<{ status: number; body: unknown }>((resolve) => {
+      answer = resolve;
+    });
+    const steps: ImportProgress[] = [];
+    const api = mockApi({
+      'GET /api/auth/me': meAs('owner'),
+      'GET /api/sugarbushes/3': sugarbush({ role: 'owner' }),
+      [TREES]: (() => pending) satisfies Handler,
+    });
+    const progressOf = (importId: string) => `GET /api/sugarbushes/3/imports/${importId}/progress`;
+    const { user } = renderPage({
+      path: '/sugarbushes/:id/imports',
+      url: '/sugarbushes/3/imports',
+      element: <ImportsRoute />,
+    });
+    await screen.findByLabelText('What the file holds');
+    const rows = Array.from({ length: 10_000 }, (_, i) => `L-${i},sugar-maple`).join('\n');
+    // The page makes the id; the server's answers are routed to it once it is known.
+    const answerSteps = () => {
+      const [post] = api.to(TREES);
+      const importId = post.headers.get('x-import-id')!;
+      return { importId, key: progressOf(importId) };
+    };
+    await user.upload(
+      screen.getByLabelText('CSV or GPX file'),
+      new File([`tag,species\n${rows}\n`], 'trees.csv', { type: 'text/csv' }),
+    );
+    const bar = await screen.findByRole('progressbar', { name: 'Check of the file' });
+    const { importId } = answerSteps();
+    expect(importId).toMatch(
+      /^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/,
+    );
+    // The upload is done (the stand-in sends it at once); the server has not said yet.
+    await waitFor(() =>
+      expect(bar).toHaveAttribute(
+        'aria-valuetext',
+        expect.stringMatching(/Step 2 of 3: Reading the file/),
+      ),
+    );
+    expect(bar).not.toHaveAttribute('aria-valuenow');
+
+    steps.push({
+      importId,
+      kind: 'trees',
+      dryRun: true,
+      phase: 'checking',
+      done: 4_000,
+      total: 10_000,
+    });
+    api.route(answerSteps().key, () => ({ status: 200, body: steps.at(-1) }));
+    await waitFor(() => expect(bar).toHaveAttribute('aria-valuenow', '40'), { timeout: 3000 });
+    expect(bar).toHaveAttribute(
+      'aria-valuetext',
+      'Step 3 of 3: Checking rows, 4,000 of 10,000 rows',
+    );
+    expect(screen.getByText('Checking the file — step 3 of 3: checking rows')).toHaveAttribute(
+      'role',
+      'status',
+    );
+
+    answer({ status: 200, body: result({ kind: 'trees', rows: 10_000, created: 10_000 }) });
+    expect(await screen.findByText(/10,000 rows read/)).toBeInTheDocument();
+    expect(screen.queryByRole('progressbar')).not.toBeInTheDocument();
+  });
+
+  it('when a check finds thousands of problems, then the page says it shows the first of them and counts all', async () => {
+    const errors = Array.from({ length: 200 }, (_, i) => ({
+      row: i + 2,
+      column: 'species',
+      message: `Unknown species on row ${i + 2}`,
+    }));
+    const { user } = openImports('owner', {
+      [TREES]: result({
+        kind: 'trees',
+        rows: 9_812,
+        created: 0,
+        errors,
+        totalErrors: 9_812,
+        rowsWithErrors: 9_812,
+        truncated: true,
+      }),
+    });
+    await screen.findByLabelText('What the file holds');
+    await user.upload(
+      screen.getByLabelText('CSV or GPX file'),
+      new File(['tag,species\n'], 'trees.csv', { type: 'text/csv' }),
+    );
+    expect(await screen.findByText(/Showing the first 200 of 9,812 problems/)).toBeInTheDocument();
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      '9,812 problems to fix in the file or the mapping, in 9,812 rows.',
+    );
+    expect(screen.getAllByText(/^Unknown species on row/)).toHaveLength(200);
+    expect(screen.getByRole('button', { name: 'Import' })).toBeDisabled();
+  });
+
+  it('when a GPX check finds problems, then each names its waypoint by number and name, or the whole file', async () => {
+    const { user } = openImports('owner', {
+      [TREES]: result({
+        kind: 'trees',
+        source: 'gpx',
+        created: 0,
+        errors: [
+          { row: 0, column: 'species', message: 'No column holds species' },
+          { row: 3, waypoint: 'GW-3', column: 'lat', message: 'Latitude out of range' },
+          { row: 4, waypoint: '', column: 'name', message: 'A tag is needed' },
+        ],
+      }),
+    });
+    await screen.findByLabelText('What the file holds');
+    await user.upload(screen.getByLabelText('CSV or GPX file'), new File(['<gpx/>'], 'w.gpx'));
+    const table = await screen.findByRole('table', { name: 'Rows that cannot be imported' });
+    const places = within(table)
+      .getAllByRole('row')
+      .slice(1)
+      .map((r) => within(r).getAllByRole('cell')[0].textContent);
+    expect(places).toEqual(['whole file', '3 “GW-3”', '4 (no name)']);
   });
 
   it('when a tapper opens it, then only tapholes can be chosen', async () => {
@@ -161,5 +293,34 @@ describe('the import page', () => {
     const { api } = openImports('consultant');
     expect(await screen.findByText(/does not import records/)).toBeInTheDocument();
     expect(api.to(TREES)).toHaveLength(0);
+  });
+});
+
+describe('what the progress bar says', () => {
+  it('when the file is still going up, then it counts the bytes; once the server writes, its rows', () => {
+    expect(progressShown(false, { sent: 120_000, total: 400_000 }, undefined)).toEqual({
+      step: 1,
+      of: 5,
+      label: 'Sending the file',
+      percent: 30,
+      detail: '120 kB of 400 kB',
+    });
+    const writing: ImportProgress = {
+      importId: 'a',
+      kind: 'trees',
+      dryRun: false,
+      phase: 'writing',
+      done: 2_500,
+      total: 10_000,
+    };
+    expect(progressShown(false, { sent: 1, total: 1 }, writing)).toMatchObject({
+      step: 4,
+      of: 5,
+      percent: 25,
+      detail: '2,500 of 10,000 rows',
+    });
+    expect(
+      progressShown(false, null, { ...writing, phase: 'advising', done: 1, total: 3 }),
+    ).toMatchObject({ step: 5, percent: 33, detail: '33 %' });
   });
 });

@@ -1,5 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ImportKind, ImportMapping, ImportResult } from '@shared/schemas/imports';
+import {
+  IMPORT_ID_HEADER,
+  type ImportKind,
+  type ImportMapping,
+  type ImportResult,
+} from '@shared/schemas/imports';
 import { api } from '@/lib/api-client';
 import { queryRoots } from '@/lib/query-roots';
 
@@ -9,6 +14,10 @@ export interface ImportRequest {
   mapping: ImportMapping;
   /** Check only: the answer reports every row and nothing is written. */
   dryRun: boolean;
+  /** A random id under which the server keeps this import's steps (`useImportProgress`). */
+  importId: string;
+  /** Bytes of the upload sent, of all. */
+  onUpload?: (sent: number, total: number) => void;
 }
 
 export const importFile = (sugarbushId: number, r: ImportRequest) => {
@@ -18,6 +27,10 @@ export const importFile = (sugarbushId: number, r: ImportRequest) => {
   return api.postForm<ImportResult>(
     `/sugarbushes/${sugarbushId}/imports/${r.kind}${r.dryRun ? '?dryRun=1' : ''}`,
     form,
+    {
+      headers: { [IMPORT_ID_HEADER]: r.importId },
+      onUploadProgress: r.onUpload ?? (() => undefined),
+    },
   );
 };
 

@@ -25,8 +25,11 @@ import { Field, controlClass } from '@/components/ui/field';
 import { SelectField } from '@/components/ui/select-field';
 import { can } from '@/lib/auth';
 import { applyServerErrors } from '@/lib/form-errors';
+import { randomId } from '@/lib/random-id';
+import { useImportProgress } from '../api/get-import-progress';
 import { useImportFile } from '../api/import-file';
 import { ColumnMapping } from './column-mapping';
+import { ImportProgressBar, type UploadState } from './import-progress';
 import { ImportReport } from './import-report';
 
 const rowsLabel = (n: number) => `${n} ${n === 1 ? 'row' : 'rows'}`;
@@ -59,6 +62,9 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
   const [stale, setStale] = useState(false);
   const [formError, setFormError] = useState<string | null>(null);
   const send = useImportFile(sugarbushId);
+  const [upload, setUpload] = useState<UploadState | null>(null);
+  const importId = send.variables?.importId ?? null;
+  const progress = useImportProgress(sugarbushId, importId, send.isPending);
   const kind = form.watch('kind');
   const columns = form.watch('columns');
   const defaultSpecies = form.watch('defaultSpecies');
@@ -70,8 +76,11 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
       return;
     }
     setFormError(null);
+    setUpload(null);
     send.mutate(
       {
+        importId: randomId(),
+        onUpload: (sent, total) => setUpload({ sent, total }),
         kind: values.kind,
         file: chosen,
         mapping: {
@@ -124,7 +133,7 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
     report !== null &&
     !stale &&
     !send.isPending &&
-    report.errors.length === 0 &&
+    report.totalErrors === 0 &&
     report.created + report.updated > 0;
 
   return (
@@ -209,7 +218,11 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
         </p>
       )}
       {send.isPending && (
-        <p role="status">{send.variables?.dryRun ? 'Checking the file…' : 'Importing…'}</p>
+        <ImportProgressBar
+          dryRun={send.variables?.dryRun ?? true}
+          upload={upload}
+          server={progress.data?.importId === importId ? progress.data : undefined}
+        />
       )}
 
       {done && (
@@ -247,7 +260,7 @@ export function ImportPanel({ sugarbushId, role }: { sugarbushId: number; role: 
           disabled={!canImport}
           onClick={form.handleSubmit((values) => run(false, values))}
         >
-          {report && report.errors.length === 0
+          {report && report.totalErrors === 0
             ? `Import ${rowsLabel(report.created + report.updated)}`
             : 'Import'}
         </Button>

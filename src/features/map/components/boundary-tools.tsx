@@ -31,7 +31,7 @@ interface BoundaryToolsProps {
 }
 
 /**
- * Import an outline from a GIS file (GeoJSON, KML, GPX, zipped Shapefile; several outlines in
+ * Import an outline from a GIS file (GeoJSON, KML or KMZ, GPX, zipped Shapefile; several outlines in
  * one file are chosen from or merged), or draw and edit the boundary on the map.
  */
 export function BoundaryTools({

@@ -1,0 +1,12 @@
+/**
+ * A random version-4 UUID. `crypto.randomUUID` exists only on HTTPS and localhost; a server on
+ * the farm's own network over plain HTTP still has `getRandomValues`.
+ */
+export function randomId(): string {
+  if (typeof crypto.randomUUID === 'function' && window.isSecureContext) return crypto.randomUUID();
+  const b = crypto.getRandomValues(new Uint8Array(16));
+  b[6] = (b[6] & 0x0f) | 0x40;
+  b[8] = (b[8] & 0x3f) | 0x80;
+  const hex = [...b].map((x) => x.toString(16).padStart(2, '0')).join('');
+  return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
+}
