@@ -4,6 +4,7 @@ import {
   type ImportMapping,
   type ImportResult,
 } from '../../../shared/schemas/imports';
+import { takeWriteLock } from '../../lib/db-engine';
 import { auditRepository } from '../audit/audit.repository';
 import { mapRepository } from '../map/map.repository';
 import { importsRepository } from './imports.repository';
@@ -71,6 +72,8 @@ export async function runImport(db: Knex, task: ImportTask): Promise<ImportOutco
   if (read.errors.length > 0 && read.records.length === 0) return { result, seasons: [] };
 
   const seasons = await db.transaction(async (trx) => {
+    // Reads, then writes, on the worker's own connection: the lock first (a dry run writes nothing).
+    if (!dryRun) await takeWriteLock(trx, 'sugarbushes', sugarbushId);
     const repo = importsRepository(trx);
     const trees = await repo.treesByTag(
       sugarbushId,
