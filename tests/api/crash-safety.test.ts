@@ -22,7 +22,6 @@ let server: BenchServer | undefined;
 
 afterAll(async () => {
   await server?.stop();
-  if (process.env.KEEP_CRASH_LOG) return;
   fs.rmSync(scratch, { recursive: true, force: true });
 });
 
