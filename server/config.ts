@@ -102,6 +102,10 @@ const envSchema = z.object({
     .int()
     .min(1)
     .default(20 * 1024 * 1024),
+  /** Folder for `npm run backup`; defaults to `backups/` beside the database file. */
+  BACKUP_DIR: z.string().min(1).optional(),
+  /** How many backups `npm run backup` keeps (the newest ones). */
+  BACKUP_KEEP: z.coerce.number().int().min(1).max(1000).default(14),
   PHOTO_S3_BUCKET: unsetWhenEmpty(s3Bucket),
   PHOTO_S3_REGION: unsetWhenEmpty(
     z.string().regex(/^[a-z]{2}(-[a-z0-9]+)+$|^auto$/, 'must be a region name such as eu-west-1'),
@@ -143,10 +147,11 @@ export type PhotoStorageConfig =
       prefix: string;
     };
 
-export type Config = Omit<Parsed, 'SEED_DEMO' | 'BASEMAP_DIR'> & {
+export type Config = Omit<Parsed, 'SEED_DEMO' | 'BASEMAP_DIR' | 'BACKUP_DIR'> & {
   appUrl: string;
   SEED_DEMO: boolean;
   BASEMAP_DIR: string;
+  BACKUP_DIR: string;
   database: DatabaseTarget;
   photos: PhotoStorageConfig;
 };
@@ -186,6 +191,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     SEED_DEMO: c.SEED_DEMO ?? !production,
     appUrl: c.APP_URL ?? `http://localhost:${c.PORT}`,
     BASEMAP_DIR: c.BASEMAP_DIR ?? path.join(path.dirname(c.DATABASE_FILE), 'basemaps'),
+    BACKUP_DIR: c.BACKUP_DIR ?? path.join(path.dirname(c.DATABASE_FILE), 'backups'),
     photos: photoStorage(c),
     database: c.DATABASE_URL
       ? { client: 'pg', url: c.DATABASE_URL, poolMax: c.DATABASE_POOL_MAX }

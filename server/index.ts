@@ -2,6 +2,7 @@ import type { Server } from 'node:http';
 import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { openDb, migrateLatest } from './db';
+import { holdServerLock } from './lib/server-lock';
 
 /** Migrate, then listen. Resolves once the server accepts connections. */
 export async function startServer(env: NodeJS.ProcessEnv = process.env) {
@@ -9,6 +10,9 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
   const db = openDb(config.database);
   await migrateLatest(db);
   const app = createApp({ config, db });
+  // A restore refuses to replace the SQLite file while this names a live process.
+  const releaseLock =
+    config.database.client === 'sqlite' ? holdServerLock(config.database.filename) : () => {};
   const server = await new Promise<Server>((resolve, reject) => {
     const s = config.HOST
       ? app.listen(config.PORT, config.HOST, () => resolve(s))
@@ -26,6 +30,7 @@ export async function startServer(env: NodeJS.ProcessEnv = process.env) {
     await app.ctx.advice.close();
     app.ctx.photos.close();
     await db.destroy();
+    releaseLock();
   };
   return { config, db, server, url, close, ctx: app.ctx };
 }

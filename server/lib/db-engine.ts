@@ -17,3 +17,18 @@ export const isUniqueViolation = (err: unknown): boolean => {
 export async function lockRow(trx: Knex.Transaction, table: string, id: number): Promise<void> {
   if (isPostgres(trx)) await trx(table).where({ id }).forUpdate().first('id');
 }
+
+/**
+ * On SQLite, take the write lock as the first statement of a transaction that reads before it
+ * writes on a connection of its own (a worker's). Otherwise a write another connection commits
+ * between its first read and its first write leaves its snapshot stale, and SQLite ends the
+ * transaction with SQLITE_BUSY at once — no busy timeout waits that out. A write as the first
+ * statement takes the lock and a fresh snapshot together, waiting its turn. PostgreSQL needs none.
+ */
+export async function takeWriteLock(
+  trx: Knex.Transaction,
+  table: string,
+  id: number,
+): Promise<void> {
+  if (!isPostgres(trx)) await trx(table).where({ id }).update({ id: trx.raw('id') });
+}

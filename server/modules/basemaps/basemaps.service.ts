@@ -34,7 +34,6 @@ const matches = (header: string | undefined, etag: string) =>
 export function basemapsService(ctx: AppContext, tiles: TileStore) {
   const repo = basemapsRepository(ctx.db);
   const members = membersRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
   const fileOf = (id: number) => path.join(ctx.config.BASEMAP_DIR, `${id}.mbtiles`);
 
   return {
@@ -68,15 +67,16 @@ export function basemapsService(ctx: AppContext, tiles: TileStore) {
             sizeBytes: file.size,
             uploadedBy: access.userId,
           });
+          await auditRepository(trx).record({
+            sugarbushId: access.sugarbushId,
+            userId: access.userId,
+            action: 'create',
+            entity: 'basemap',
+            entityId: newId,
+          });
+          // The file is in place before the row commits, so a committed row always has its file.
           fs.renameSync(file.path, fileOf(newId));
           return newId;
-        });
-        await audit.record({
-          sugarbushId: access.sugarbushId,
-          userId: access.userId,
-          action: 'create',
-          entity: 'basemap',
-          entityId: id,
         });
         return (await repo.find(id))!;
       } finally {

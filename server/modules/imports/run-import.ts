@@ -6,6 +6,7 @@ import {
   type ImportResult,
   type ImportRowError,
 } from '../../../shared/schemas/imports';
+import { takeWriteLock } from '../../lib/db-engine';
 import { auditRepository } from '../audit/audit.repository';
 import { mapRepository } from '../map/map.repository';
 import { importsRepository } from './imports.repository';
@@ -89,6 +90,8 @@ export async function runImport(
 
   let changed = 0;
   const seasons = await db.transaction(async (trx) => {
+    // Reads, then writes, on the worker's own connection: the lock first (a dry run writes nothing).
+    if (!dryRun) await takeWriteLock(trx, 'sugarbushes', sugarbushId);
     const repo = importsRepository(trx);
     const trees = await repo.treesByTag(
       sugarbushId,

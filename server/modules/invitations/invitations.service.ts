@@ -28,7 +28,6 @@ export function invitationsService(ctx: AppContext) {
   const repo = invitationsRepository(ctx.db);
   const users = usersRepository(ctx.db);
   const members = membersRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
 
   /** The link goes out after the answer; only its recipient ever sees it. */
   function mailLink(
@@ -80,7 +79,7 @@ export function invitationsService(ctx: AppContext) {
       const { token, hash } = newSecretToken();
       const id = await ctx.db.transaction(async (trx) => {
         await invitationsRepository(trx).revokeOpenFor(access.sugarbushId, input.email);
-        return invitationsRepository(trx).create({
+        const newId = await invitationsRepository(trx).create({
           sugarbushId: access.sugarbushId,
           email: input.email,
           role: input.role,
@@ -88,17 +87,18 @@ export function invitationsService(ctx: AppContext) {
           invitedBy: access.userId,
           expiresAt: expiry(),
         });
+        await auditRepository(trx).record({
+          sugarbushId: access.sugarbushId,
+          userId: access.userId,
+          action: 'invite',
+          entity: 'invitation',
+          entityId: newId,
+          detail: { email: input.email, role: input.role },
+        });
+        return newId;
       });
       const { stand, by } = await names(access);
       mailLink(input, token, by, stand);
-      await audit.record({
-        sugarbushId: access.sugarbushId,
-        userId: access.userId,
-        action: 'invite',
-        entity: 'invitation',
-        entityId: id,
-        detail: { email: input.email, role: input.role },
-      });
       return openOne(access.sugarbushId, id);
     },
 
@@ -106,28 +106,32 @@ export function invitationsService(ctx: AppContext) {
     async resend(access: Access, id: number): Promise<Invitation> {
       const invitation = await openOne(access.sugarbushId, id);
       const { token, hash } = newSecretToken();
-      await repo.renew(id, hash, expiry());
+      await ctx.db.transaction(async (trx) => {
+        await invitationsRepository(trx).renew(id, hash, expiry());
+        await auditRepository(trx).record({
+          sugarbushId: access.sugarbushId,
+          userId: access.userId,
+          action: 'resend',
+          entity: 'invitation',
+          entityId: id,
+        });
+      });
       const { stand, by } = await names(access);
       mailLink(invitation, token, by, stand);
-      await audit.record({
-        sugarbushId: access.sugarbushId,
-        userId: access.userId,
-        action: 'resend',
-        entity: 'invitation',
-        entityId: id,
-      });
       return openOne(access.sugarbushId, id);
     },
 
     async revoke(access: Access, id: number): Promise<void> {
       await openOne(access.sugarbushId, id);
-      await repo.revoke(id);
-      await audit.record({
-        sugarbushId: access.sugarbushId,
-        userId: access.userId,
-        action: 'revoke',
-        entity: 'invitation',
-        entityId: id,
+      await ctx.db.transaction(async (trx) => {
+        await invitationsRepository(trx).revoke(id);
+        await auditRepository(trx).record({
+          sugarbushId: access.sugarbushId,
+          userId: access.userId,
+          action: 'revoke',
+          entity: 'invitation',
+          entityId: id,
+        });
       });
     },
 
@@ -181,15 +185,15 @@ export function invitationsService(ctx: AppContext) {
           .catch((err: unknown) => {
             throw isUniqueViolation(err) ? alreadyMember() : err;
           });
-        return { user: joining, sugarbushId: row.sugarbush_id, role: row.role, id: row.id };
-      });
-      await audit.record({
-        sugarbushId: result.sugarbushId,
-        userId: result.user.id,
-        action: 'accept',
-        entity: 'invitation',
-        entityId: result.id,
-        detail: { role: result.role },
+        await auditRepository(trx).record({
+          sugarbushId: row.sugarbush_id,
+          userId: joining.id,
+          action: 'accept',
+          entity: 'invitation',
+          entityId: row.id,
+          detail: { role: row.role },
+        });
+        return { user: joining, sugarbushId: row.sugarbush_id, role: row.role };
       });
       return result;
     },

@@ -28,7 +28,6 @@ const lastOwner = () =>
 
 export function membersService(ctx: AppContext) {
   const repo = membersRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
 
   return {
     list(sugarbushId: number, q: MemberListQuery): Promise<Page<Member>> {
@@ -43,7 +42,7 @@ export function membersService(ctx: AppContext) {
      * cannot leave none: the second one counts after the first has committed.
      */
     async changeRole(access: Access, userId: number, patch: MemberPatch): Promise<Member> {
-      const before = await ctx.db.transaction(async (trx) => {
+      await ctx.db.transaction(async (trx) => {
         await lockRow(trx, 'sugarbushes', access.sugarbushId);
         const members = membersRepository(trx);
         const member = await members.find(access.sugarbushId, userId);
@@ -52,21 +51,20 @@ export function membersService(ctx: AppContext) {
           if ((await members.countWithRole(access.sugarbushId, managers)) <= 1) throw lastOwner();
         }
         await members.setRole(access.sugarbushId, userId, patch.role);
-        return member;
-      });
-      await audit.record({
-        sugarbushId: access.sugarbushId,
-        userId: access.userId,
-        action: 'change-role',
-        entity: 'member',
-        entityId: userId,
-        detail: { from: before.role, to: patch.role },
+        await auditRepository(trx).record({
+          sugarbushId: access.sugarbushId,
+          userId: access.userId,
+          action: 'change-role',
+          entity: 'member',
+          entityId: userId,
+          detail: { from: member.role, to: patch.role },
+        });
       });
       return (await repo.find(access.sugarbushId, userId))!;
     },
 
     async remove(access: Access, userId: number): Promise<void> {
-      const removed = await ctx.db.transaction(async (trx) => {
+      await ctx.db.transaction(async (trx) => {
         await lockRow(trx, 'sugarbushes', access.sugarbushId);
         const members = membersRepository(trx);
         const member = await members.find(access.sugarbushId, userId);
@@ -77,15 +75,14 @@ export function membersService(ctx: AppContext) {
         )
           throw lastOwner();
         await members.remove(access.sugarbushId, userId);
-        return member;
-      });
-      await audit.record({
-        sugarbushId: access.sugarbushId,
-        userId: access.userId,
-        action: 'remove',
-        entity: 'member',
-        entityId: userId,
-        detail: { role: removed.role, email: removed.email },
+        await auditRepository(trx).record({
+          sugarbushId: access.sugarbushId,
+          userId: access.userId,
+          action: 'remove',
+          entity: 'member',
+          entityId: userId,
+          detail: { role: member.role, email: member.email },
+        });
       });
     },
   };

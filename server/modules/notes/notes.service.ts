@@ -19,7 +19,6 @@ export function followUpDays(now: Date = new Date()): FollowUpDays {
 
 export function notesService(ctx: AppContext) {
   const repo = notesRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
 
   return {
     list(where: { treeId?: number; sugarbushId?: number }, q: NoteListQuery) {
@@ -27,21 +26,24 @@ export function notesService(ctx: AppContext) {
       return pageOf(q, (range) => repo.list(where, filters, followUpDays(), range));
     },
 
+    /** The note and its audit entry are written together or not at all. */
     async create(access: Access, treeId: number | null, input: NoteInput): Promise<Note> {
-      const note = await repo.create({
-        sugarbushId: access.sugarbushId,
-        treeId,
-        authorId: access.userId,
-        ...input,
+      return ctx.db.transaction(async (trx) => {
+        const note = await notesRepository(trx).create({
+          sugarbushId: access.sugarbushId,
+          treeId,
+          authorId: access.userId,
+          ...input,
+        });
+        await auditRepository(trx).record({
+          sugarbushId: access.sugarbushId,
+          userId: access.userId,
+          action: 'create',
+          entity: 'note',
+          entityId: note.id,
+        });
+        return note;
       });
-      await audit.record({
-        sugarbushId: access.sugarbushId,
-        userId: access.userId,
-        action: 'create',
-        entity: 'note',
-        entityId: note.id,
-      });
-      return note;
     },
 
     /**
@@ -58,16 +60,18 @@ export function notesService(ctx: AppContext) {
         Object.assign(columns, { resolved_at: null, resolved_by: null });
       if (change.followUpOn !== undefined) columns.follow_up_on = change.followUpOn;
       if (Object.keys(columns).length > 0) {
-        await repo.update(noteId, columns);
         const action =
           'resolved_at' in columns ? (change.resolved ? 'resolve' : 'reopen') : 'update';
-        await audit.record({
-          sugarbushId: access.sugarbushId,
-          userId: access.userId,
-          action,
-          entity: 'note',
-          entityId: noteId,
-          detail: change,
+        await ctx.db.transaction(async (trx) => {
+          await notesRepository(trx).update(noteId, columns);
+          await auditRepository(trx).record({
+            sugarbushId: access.sugarbushId,
+            userId: access.userId,
+            action,
+            entity: 'note',
+            entityId: noteId,
+            detail: change,
+          });
         });
       }
       return repo.one(noteId);

@@ -18,7 +18,6 @@ export interface StoredPhoto {
 
 export function photosService(ctx: AppContext) {
   const repo = photosRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
   const store = ctx.photos;
 
   return {
@@ -38,26 +37,29 @@ export function photosService(ctx: AppContext) {
       try {
         await store.put(keys.full, photo.full, photo.contentType);
         await store.put(keys.thumb, photo.thumb, 'image/webp');
-        const saved = await repo.create({
-          sugarbush_id: access.sugarbushId,
-          tree_id: on.treeId,
-          note_id: on.noteId,
-          uploaded_by: access.userId,
-          storage_key: keys.full,
-          thumb_key: keys.thumb,
-          content_type: photo.contentType,
-          byte_size: photo.full.length,
-          width: photo.width,
-          height: photo.height,
+        // The files are stored before the row commits: a committed row always has its files.
+        return await ctx.db.transaction(async (trx) => {
+          const saved = await photosRepository(trx).create({
+            sugarbush_id: access.sugarbushId,
+            tree_id: on.treeId,
+            note_id: on.noteId,
+            uploaded_by: access.userId,
+            storage_key: keys.full,
+            thumb_key: keys.thumb,
+            content_type: photo.contentType,
+            byte_size: photo.full.length,
+            width: photo.width,
+            height: photo.height,
+          });
+          await auditRepository(trx).record({
+            sugarbushId: access.sugarbushId,
+            userId: access.userId,
+            action: 'create',
+            entity: 'photo',
+            entityId: saved.id,
+          });
+          return saved;
         });
-        await audit.record({
-          sugarbushId: access.sugarbushId,
-          userId: access.userId,
-          action: 'create',
-          entity: 'photo',
-          entityId: saved.id,
-        });
-        return saved;
       } catch (err) {
         await forget();
         throw err;

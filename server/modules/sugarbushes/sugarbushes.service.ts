@@ -13,7 +13,6 @@ import type { sugarbushInputSchema, sugarbushPatchSchema } from '../../../shared
 
 export function sugarbushesService(ctx: AppContext) {
   const repo = sugarbushesRepository(ctx.db);
-  const audit = auditRepository(ctx.db);
 
   return {
     async list(userId: number, q: ListQuery): Promise<Page<Sugarbush>> {
@@ -37,14 +36,14 @@ export function sugarbushesService(ctx: AppContext) {
           sunnyAzimuthDeg: input.sunnyAzimuthDeg,
         });
         await membersRepository(trx).add(userId, newId, 'owner');
+        await auditRepository(trx).record({
+          sugarbushId: newId,
+          userId,
+          action: 'create',
+          entity: 'sugarbush',
+          entityId: newId,
+        });
         return newId;
-      });
-      await audit.record({
-        sugarbushId: id,
-        userId,
-        action: 'create',
-        entity: 'sugarbush',
-        entityId: id,
       });
       return this.get(userId, id);
     },
