@@ -229,7 +229,7 @@ describeOnSqlite('query plans of the hot reads', () => {
   });
 
   it('when the season log’s weather and sap are read, in each season, order and collection, then no statement walks a whole table', async () => {
-    const send = (url: string, body: unknown) =>
+    const send = (url: string, body: object) =>
       owner.agent.post(url).set('x-csrf-token', owner.csrf).send(body);
     for (const [date, collection] of [
       ['2025-03-10', 'vacuum'],

@@ -14,7 +14,7 @@ import {
 } from '../../server/modules/weather/forecast/stand-in-server';
 import { addMember, addSugarbush, addTree, addUser, makeTestApp, signIn } from './test-app';
 
-const boundary = {
+const boundary: GeoJSON.Polygon = {
   type: 'Polygon',
   coordinates: [
     [
