@@ -11,6 +11,9 @@ export const auditKinds = [
   'member',
   'invitation',
   'basemap',
+  'photo',
+  'weather-day',
+  'sap-entry',
 ] as const;
 
 export const auditQuerySchema = listQuerySchema.extend({

@@ -12,6 +12,9 @@ export const auditKindLabels: Record<string, string> = {
   member: 'Team',
   invitation: 'Invitations',
   basemap: 'Map backgrounds',
+  photo: 'Photos',
+  'weather-day': 'Weather',
+  'sap-entry': 'Sap',
 };
 
 type Detail = Record<string, unknown>;
@@ -93,6 +96,30 @@ export function auditWords(item: AuditItem, unit: LengthUnit): string {
       return `Joined the team as ${role(d.role)}`;
     case 'basemap:create':
       return 'Uploaded a map background';
+    case 'photo:create':
+      return 'Added a photo';
+    case 'weather-day:record':
+    case 'weather-day:import':
+    case 'weather-day:replace': {
+      const on = typeof d.date === 'string' ? ` for ${d.date}` : '';
+      const how =
+        item.action === 'import'
+          ? 'Imported the weather'
+          : item.action === 'replace'
+            ? 'Replaced the weather'
+            : 'Recorded the weather';
+      return `${how}${on}`;
+    }
+    case 'sap-entry:create': {
+      const on = typeof d.collectedOn === 'string' ? ` of ${d.collectedOn}` : '';
+      return `Recorded the sap${on}`;
+    }
+    case 'sap-entry:correct':
+      return `Corrected a sap entry (${
+        Object.keys(d)
+          .filter((k) => k !== 'earlier')
+          .join(', ') || 'no change'
+      })`;
     default:
       return `${item.action} ${item.kind}`;
   }
