@@ -1,0 +1,58 @@
+import type { SapSeasonTotals } from '@shared/schemas/sap';
+import { formatNumber } from '@/lib/units';
+import { formatBrix, formatVolume, type SeasonUnits } from '../lib/season-units';
+
+/** The season's sap at a glance: volume, sugar, taps and yield, syrup by both rules and as made. */
+export function SeasonTotals({
+  season,
+  totals,
+  units,
+}: {
+  season: number;
+  totals: SapSeasonTotals;
+  units: SeasonUnits;
+}) {
+  const figures: { label: string; value: string; note?: string }[] = [
+    {
+      label: 'Sap collected',
+      value: formatVolume(totals.volumeL, units.volume),
+      note: `on ${formatNumber(totals.days)} ${totals.days === 1 ? 'day' : 'days'}`,
+    },
+    { label: 'Mean sugar', value: formatBrix(totals.meanSugarPct), note: 'weighted by volume' },
+    { label: 'Taps', value: formatNumber(totals.taps), note: `tapholes recorded for ${season}` },
+    {
+      label: 'Sap per tap',
+      value: formatVolume(totals.yieldPerTapL, units.volume),
+      note: totals.taps === 0 ? 'no tapholes recorded' : undefined,
+    },
+    {
+      label: 'Syrup expected, Rule of 86',
+      value: formatVolume(totals.expectedSyrupL, units.volume),
+      note: 'sap ÷ (86 ÷ °Brix)',
+    },
+    {
+      label: 'Syrup expected, revised rule',
+      value: formatVolume(totals.expectedSyrupLRevised, units.volume),
+      note: 'for 66.0 °Brix syrup: sap ÷ (87.1 ÷ °Brix − 0.32)',
+    },
+    {
+      label: 'Syrup made',
+      value: formatVolume(totals.syrupMadeL, units.volume),
+      note: totals.syrupMadeL === null ? 'not entered' : undefined,
+    },
+  ];
+  return (
+    <dl
+      aria-label={`Season ${season} totals`}
+      className="grid grid-cols-2 gap-x-6 gap-y-4 sm:grid-cols-3 lg:grid-cols-4"
+    >
+      {figures.map((f) => (
+        <div key={f.label} className="border-t border-rule pt-2">
+          <dt className="text-sm text-bark">{f.label}</dt>
+          <dd className="text-lg font-bold tabular-nums">{f.value}</dd>
+          {f.note && <dd className="text-sm text-bark">{f.note}</dd>}
+        </div>
+      ))}
+    </dl>
+  );
+}
