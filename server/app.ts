@@ -14,6 +14,8 @@ import type { AppContext } from './context';
 import { createBackground } from './lib/background';
 import { createAdviceJobs } from './modules/advice/advice-jobs';
 import { createPhotoStore, type PhotoStore } from './modules/photos/photo-store';
+import { createForecast } from './modules/weather/forecast/create-forecast';
+import type { ForecastProvider } from './modules/weather/forecast/forecast-provider';
 import { anonymousCsrfId } from './lib/anonymous-id';
 import { consoleLogger, type Logger } from './lib/logger';
 import { touchRarely } from './lib/touch-rarely';
@@ -36,6 +38,8 @@ export interface AppOptions {
   log?: Logger;
   /** Where photos are kept; by default what PHOTO_STORAGE names. */
   photos?: PhotoStore;
+  /** Where the season log's forecast comes from; by default what FORECAST_URL names. */
+  forecast?: ForecastProvider;
 }
 
 /** Build the Express app. Exported for tests; `index.ts` only listens. */
@@ -50,6 +54,7 @@ export function createApp(opts: AppOptions) {
     background: createBackground(log),
     advice: createAdviceJobs({ db, database: config.database, log }),
     photos: opts.photos ?? createPhotoStore(config.photos),
+    forecast: opts.forecast ?? createForecast(config),
   };
   const production = config.NODE_ENV === 'production';
   const app = express();

@@ -102,6 +102,18 @@ const envSchema = z.object({
     .int()
     .min(1)
     .default(20 * 1024 * 1024),
+  /**
+   * A forecast service speaking the open weather-API daily protocol (`…?latitude=&longitude=&daily=`);
+   * unset, the season log's coming days come from a stand-in series made on this server.
+   */
+  FORECAST_URL: unsetWhenEmpty(
+    z
+      .string()
+      .url()
+      .refine((v) => /^https?:\/\//i.test(v), { message: 'must be an http:// or https:// URL' }),
+  ),
+  /** How long to wait for the forecast service, in milliseconds. */
+  FORECAST_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(4000),
   PHOTO_S3_BUCKET: unsetWhenEmpty(s3Bucket),
   PHOTO_S3_REGION: unsetWhenEmpty(
     z.string().regex(/^[a-z]{2}(-[a-z0-9]+)+$|^auto$/, 'must be a region name such as eu-west-1'),

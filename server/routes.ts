@@ -16,10 +16,12 @@ import { notesRoutes } from './modules/notes/notes.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
 import { plansRoutes } from './modules/plans/plans.routes';
 import { roundRoutes } from './modules/round/round.routes';
+import { sapRoutes } from './modules/sap/sap.routes';
 import { sugarbushesRoutes } from './modules/sugarbushes/sugarbushes.routes';
 import { tapholesRoutes } from './modules/tapholes/tapholes.routes';
 import { treesRoutes } from './modules/trees/trees.routes';
 import { trendsRoutes } from './modules/trends/trends.routes';
+import { weatherRoutes } from './modules/weather/weather.routes';
 
 /** Every API route behind sign-in (the auth routes are mounted before this). */
 export function apiRoutes(ctx: AppContext) {
@@ -44,5 +46,7 @@ export function apiRoutes(ctx: AppContext) {
   router.use(invitationsRoutes(ctx));
   router.use(importsRoutes(ctx));
   router.use(exportsRoutes(ctx));
+  router.use(weatherRoutes(ctx));
+  router.use(sapRoutes(ctx));
   return router;
 }

@@ -70,12 +70,12 @@ export function treeAccess(db: Knex): RequestHandler {
 }
 
 /**
- * Member of the sugarbush holding the row named by `:param` in `table` (a note, a photo), or 404
+ * Member of the sugarbush holding the row named by `:param` in `table` (a note, a photo, a sap entry), or 404
  * for it. The row's id, stand and tree land in `res.locals.row`.
  */
 function rowAccess(
   db: Knex,
-  table: 'notes' | 'photos',
+  table: 'notes' | 'photos' | 'sap_entries',
   param: string,
   what: string,
 ): RequestHandler {
@@ -83,7 +83,9 @@ function rowAccess(
   return async (req, res, next) => {
     const user = currentUser(req);
     const id = idParam(req.params[param], what);
-    const row = await db(table).where({ id }).first('id', 'sugarbush_id', 'tree_id');
+    const row = await db(table)
+      .where({ id })
+      .first('id', 'sugarbush_id', table === 'sap_entries' ? db.raw('null as tree_id') : 'tree_id');
     const role = row ? await members.roleOf(user.id, row.sugarbush_id) : null;
     if (!row || !role) throw new AppError(404, 'not-found', `${what} not found`);
     res.locals.access = { sugarbushId: row.sugarbush_id, role, userId: user.id } satisfies Access;
@@ -109,6 +111,9 @@ export const noteAccess = (db: Knex) => rowAccess(db, 'notes', 'noteId', 'Note')
 
 /** Member of the stand holding the photo in `:photoId`, or 404 for the photo. */
 export const photoAccess = (db: Knex) => rowAccess(db, 'photos', 'photoId', 'Photo');
+
+/** Member of the stand holding the sap entry in `:entryId`, or 404 for the entry. */
+export const sapEntryAccess = (db: Knex) => rowAccess(db, 'sap_entries', 'entryId', 'Sap entry');
 
 /** The member's role must allow the action (the table in shared/schemas/permissions.ts), else 403. */
 export function requirePermission(action: Permission): RequestHandler {

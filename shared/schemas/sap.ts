@@ -44,6 +44,15 @@ export const sapEntryInputSchema = z
   .strict();
 export type SapEntryInput = z.infer<typeof sapEntryInputSchema>;
 
+/** `PATCH /api/sap/:entryId`: a correction of any of the entry's fields; the earlier values stay in the audit trail. */
+export const sapCorrectionSchema = sapEntryInputSchema
+  .partial()
+  .refine((v) => Object.values(v).some((x) => x !== undefined), {
+    message: 'Give at least one field to correct',
+    path: ['_'],
+  });
+export type SapCorrection = z.infer<typeof sapCorrectionSchema>;
+
 export const sapListQuerySchema = listQuerySchema.extend({
   season: seasonSchema.optional(),
   sort: z.enum(['collectedOn', '-collectedOn']).optional(),

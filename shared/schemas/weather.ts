@@ -68,7 +68,13 @@ export interface WeatherSeason {
  */
 export const weatherImportFieldsSchema = z.object({
   unit: z.enum(['F', 'C']).optional(),
-  dryRun: z.coerce.boolean().optional(),
+  // A form field is text: "false" and "0" must not read as true.
+  dryRun: z
+    .union([
+      z.boolean(),
+      z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1'),
+    ])
+    .optional(),
 });
 export type WeatherImportFields = z.infer<typeof weatherImportFieldsSchema>;
 
