@@ -115,7 +115,12 @@ export function SapEntries({
         </p>
       ) : (
         <>
-          <div className="overflow-x-auto">
+          <div
+            role="group"
+            aria-label={`Sap entries of ${season}, scrolls sideways`}
+            tabIndex={0}
+            className="relative overflow-x-auto"
+          >
             <table
               aria-label={`Sap entries of ${season}`}
               className="w-full border-collapse text-left text-sm tabular-nums"

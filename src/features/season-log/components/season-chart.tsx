@@ -48,7 +48,8 @@ function RunMark({
   if (cx === undefined || cy === undefined || !payload || payload[kind] === null) return <g />;
   const label = `${tickDayOf(payload.date)}: ${runLabels[kind].toLowerCase()}`;
   return (
-    <g data-run-day={payload.date} data-run={kind} aria-label={label}>
+    <g data-run-day={payload.date} data-run={kind}>
+      <title>{label}</title>
       {kind === 'strong' ? (
         <path
           d={`M${cx},${cy - 6} L${cx + 6},${cy + 5} L${cx - 6},${cy + 5} Z`}
@@ -89,6 +90,8 @@ export function SeasonChart({
   const bottom = Math.floor(Math.min(freezing, ...temps) / step) * step;
   const top = Math.ceil((Math.max(freezing, ...temps) + step / 2) / step) * step;
   const markAt = top + step / 2;
+  // A short season's lines are a few points: show them.
+  const lineDot = days.length < 15 ? { r: 3 } : false;
   const data: Point[] = days.map((d) => ({
     date: d.date,
     low: d.minC === null ? null : roundTo(fromCelsius(d.minC, t), 1),
@@ -116,7 +119,7 @@ export function SeasonChart({
         <ResponsiveContainer width="100%" height="100%">
           <ComposedChart
             data={data}
-            margin={{ top: 8, right: 0, bottom: 0, left: -8 }}
+            margin={{ top: 8, right: 4, bottom: 0, left: -8 }}
             accessibilityLayer={false}
           >
             <XAxis dataKey="date" tickFormatter={tickDayOf} minTickGap={16} {...axisProps(FONT)} />
@@ -140,7 +143,7 @@ export function SeasonChart({
               yAxisId="brix"
               orientation="right"
               hide={phone}
-              width={44}
+              width={phone ? 0 : 44}
               domain={[0, (max: number) => Math.max(4, Math.ceil(max + 0.5))]}
               tickFormatter={(v: number) => `${formatNumber(v)}\u00a0°Bx`}
               {...axisProps(FONT)}
@@ -154,13 +157,14 @@ export function SeasonChart({
                 return [`${formatNumber(Number(value), 1)} ${unitOf[key]}`, name];
               }}
             />
-            <Legend wrapperStyle={{ fontSize: FONT }} />
+            <Legend wrapperStyle={{ fontSize: FONT }} itemSorter={null} />
             <Bar
               yAxisId="sap"
               dataKey="sap"
               name={`Sap (${units.volume})`}
               fill={colors.sap}
               fillOpacity={0.55}
+              maxBarSize={28}
               isAnimationActive={false}
             />
             <ReferenceLine
@@ -181,7 +185,7 @@ export function SeasonChart({
               name="Day high"
               stroke={HIGH}
               strokeWidth={2}
-              dot={false}
+              dot={lineDot && { ...lineDot, fill: HIGH }}
               connectNulls
               isAnimationActive={false}
             />
@@ -192,7 +196,7 @@ export function SeasonChart({
               stroke={LOW}
               strokeWidth={2}
               strokeDasharray="6 3"
-              dot={false}
+              dot={lineDot && { ...lineDot, fill: LOW }}
               connectNulls
               isAnimationActive={false}
             />
@@ -204,16 +208,16 @@ export function SeasonChart({
               strokeWidth={1.5}
               strokeDasharray="2 3"
               dot={{ r: 2 }}
-              connectNulls
               isAnimationActive={false}
             />
             <Line
               yAxisId="t"
               dataKey="strong"
-              name="Strong run ▲"
+              name="Strong run"
               legendType="triangle"
-              stroke="none"
-              fill={colors.moss}
+              // No line between the marks: the legend takes its colour from the stroke.
+              stroke={colors.moss}
+              strokeWidth={0}
               dot={(p) => <RunMark key={`s-${p.index}`} {...p} kind="strong" />}
               activeDot={false}
               isAnimationActive={false}
@@ -221,10 +225,10 @@ export function SeasonChart({
             <Line
               yAxisId="t"
               dataKey="run"
-              name="Run ●"
+              name="Run"
               legendType="circle"
-              stroke="none"
-              fill={colors.paper}
+              stroke={colors.moss}
+              strokeWidth={0}
               dot={(p) => <RunMark key={`r-${p.index}`} {...p} kind="run" />}
               activeDot={false}
               isAnimationActive={false}

@@ -23,7 +23,13 @@ export function SeasonDaysTable({
 }) {
   const t = units.temperature;
   return (
-    <div className="overflow-x-auto">
+    // Focusable, so that a keyboard can scroll it sideways on a phone.
+    <div
+      role="group"
+      aria-label={`Days of season ${season}, scrolls sideways`}
+      tabIndex={0}
+      className="relative overflow-x-auto"
+    >
       <table
         id={id}
         aria-label={`Days of season ${season}`}

@@ -41,7 +41,12 @@ function Preview({ result, unit }: { result: WeatherImportResult; unit: Temperat
           ))}
         </ul>
       )}
-      <div className="max-h-80 overflow-auto">
+      <div
+        role="group"
+        aria-label="The file's days, scrolls"
+        tabIndex={0}
+        className="relative max-h-80 overflow-auto"
+      >
         <table
           aria-label={result.dryRun ? 'Days in the file' : 'Days imported'}
           className="w-full border-collapse text-left text-sm tabular-nums"

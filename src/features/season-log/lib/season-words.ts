@@ -1,6 +1,6 @@
 import { formatTemperature, type RunClass, type TemperatureUnit } from '@shared/rules/index';
 import type { WeatherDay } from '@shared/schemas/weather';
-import { formatDate, formatNumber } from '@/lib/units';
+import { formatDate, formatNumber, todayIso } from '@/lib/units';
 import type { SeasonDay } from './season-days';
 import { formatBrix, formatVolume, type SeasonUnits } from './season-units';
 
@@ -37,18 +37,37 @@ export const tickDayOf = (iso: string) => tickDay.format(atNoon(iso));
 const nightAndDay = (d: { minC: number; maxC: number }, unit: TemperatureUnit) =>
   `${formatTemperature(d.minC, unit)} night, ${formatTemperature(d.maxC, unit)} day`;
 
-/** "Expect a run Thursday: −5 °C night, 6 °C day", for each coming day that should run. */
-export function forecastRunSentence(day: WeatherDay, unit: TemperatureUnit): string {
+const dayAfter = (iso: string, days: number) =>
+  new Date(Date.parse(`${iso}T12:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+
+/** "today", "tomorrow", else the weekday: the forecast covers one week. */
+export function whenWords(iso: string, today: string): string {
+  if (iso === today) return 'today';
+  if (iso === dayAfter(today, 1)) return 'tomorrow';
+  return weekdayOf(iso);
+}
+
+/** "Expect a run Thursday: −5 °C night, 6 °C day", for a coming day that should run. */
+export function forecastRunSentence(
+  day: WeatherDay,
+  unit: TemperatureUnit,
+  today = todayIso(),
+): string {
   const run = day.run === 'strong' ? 'a strong run' : 'a run';
-  return `Expect ${run} ${weekdayOf(day.date)}: ${nightAndDay(day, unit)}`;
+  return `Expect ${run} ${whenWords(day.date, today)}: ${nightAndDay(day, unit)}`;
 }
 
 /** The forecast's headline: the first run it expects, or that it expects none. */
-export function forecastHeadline(forecast: readonly WeatherDay[], unit: TemperatureUnit): string {
+export function forecastHeadline(
+  forecast: readonly WeatherDay[],
+  unit: TemperatureUnit,
+  today = todayIso(),
+): string {
   const first = forecast.find((d) => d.run !== 'none');
-  if (first) return forecastRunSentence(first, unit);
+  if (first) return forecastRunSentence(first, unit, today);
   const freezes = forecast.some((d) => d.minC < 0);
-  return `No run expected in the coming ${forecast.length} days: ${
+  const coming = forecast.length === 1 ? 'day' : `${formatNumber(forecast.length)} days`;
+  return `No run expected in the coming ${coming}: ${
     freezes ? 'the days stay frozen' : 'the nights do not freeze'
   }`;
 }
@@ -66,7 +85,9 @@ export function seasonSentence(season: number, days: readonly SeasonDay[], units
   const runWords =
     runs.length === 0
       ? 'no run days recorded'
-      : `${formatNumber(runs.length)} run ${runs.length === 1 ? 'day' : 'days'} (${formatNumber(strong)} strong) between ${formatDate(runs[0].date)} and ${formatDate(runs.at(-1)!.date)}`;
+      : runs.length === 1
+        ? `1 run day (${formatNumber(strong)} strong) on ${formatDate(runs[0].date)}`
+        : `${formatNumber(runs.length)} run days (${formatNumber(strong)} strong) between ${formatDate(runs[0].date)} and ${formatDate(runs.at(-1)!.date)}`;
   const sapWords =
     sapDays.length === 0
       ? 'no sap recorded'
