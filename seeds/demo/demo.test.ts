@@ -36,6 +36,8 @@ async function fingerprint(db: Knex): Promise<string> {
     ['tapholes', ['id']],
     ['notes', ['id']],
     ['memberships', ['id']],
+    ['weather_days', ['id']],
+    ['sap_entries', ['id']],
   ];
   for (const [table, order] of tables) hash.update(JSON.stringify(await db(table).orderBy(order)));
   return hash.digest('hex');
@@ -46,7 +48,7 @@ describe('demo seed', () => {
     expect(first.ms).toBeLessThan(10_000);
   });
 
-  it('is deterministic: two runs write identical stands, trees, readings, holes and notes', async () => {
+  it('is deterministic: two runs write identical stands, trees, readings, holes, notes and season logs', async () => {
     expect(await fingerprint(first.db)).toBe(await fingerprint(second.db));
   });
 

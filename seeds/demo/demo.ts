@@ -3,6 +3,7 @@ import { COBBLE_RUN, COBBLE_RUN_BOUNDARY, cobbleRunSpecs } from './cobble-run';
 import { consultantNotes, type NoteDraft } from './notes';
 import { OWL_LEDGE, OWL_LEDGE_BOUNDARY, owlLedgeSpecs } from './owl-ledge';
 import { COBBLE_RUN_NAME, OWL_LEDGE_NAME } from './people';
+import { demoSeasonLog, type SeasonLogPlan } from './season-log';
 import type { StandLayout } from './stand';
 import { BIT_CM, DEPTH_CM, conservativeTaps, traditionalTaps } from './tapping';
 import type { TreePlan } from './types';
@@ -16,7 +17,12 @@ export interface StandPlan {
   createdAt: string;
   trees: TreePlan[];
   notes: NoteDraft[];
+  /** Weather and sap of the 2025 and 2026 seasons. */
+  seasonLog: SeasonLogPlan;
 }
+
+/** The invented weather station (GHCN-Daily id format) whose daily summaries Owl Ledge imports. */
+export const OWL_LEDGE_STATION = 'USC00999999';
 
 /** The whole demo as plain data; the same every time. */
 export function buildDemo(): StandPlan[] {
@@ -46,6 +52,7 @@ export function buildDemo(): StandPlan[] {
       createdAt: '2018-09-04 09:30:00',
       trees: owl,
       notes: consultantNotes(owl),
+      seasonLog: demoSeasonLog(OWL_LEDGE.key, owl, OWL_LEDGE_STATION),
     },
     {
       name: COBBLE_RUN_NAME,
@@ -56,6 +63,8 @@ export function buildDemo(): StandPlan[] {
       createdAt: '2023-08-21 18:05:00',
       trees: cobble,
       notes: [],
+      // A thermometer on the sugarhouse wall, read by hand.
+      seasonLog: demoSeasonLog(COBBLE_RUN.key, cobble, null),
     },
   ];
 }

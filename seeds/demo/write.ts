@@ -131,6 +131,40 @@ async function writeStand(
     })),
   );
 
+  await insertInBatches(
+    trx,
+    'weather_days',
+    stand.seasonLog.weather.map((d) => ({
+      sugarbush_id: sugarbushId,
+      date: d.date,
+      min_c: d.minC,
+      max_c: d.maxC,
+      source: d.source,
+      station: d.station,
+      recorded_by: forester,
+      created_at: stamp(d.date, '20:15:00'),
+      updated_at: stamp(d.date, '20:15:00'),
+    })),
+  );
+  await insertInBatches(
+    trx,
+    'sap_entries',
+    stand.seasonLog.sap.map((e) => ({
+      sugarbush_id: sugarbushId,
+      collected_on: e.collectedOn,
+      season: Number(e.collectedOn.slice(0, 4)),
+      volume_l: e.volumeL,
+      sugar_pct: e.sugarPct,
+      held_at_c: e.heldAtC,
+      collection: e.collection,
+      syrup_made_l: e.syrupMadeL,
+      note: e.note,
+      recorded_by: tapper,
+      created_at: stamp(e.collectedOn, '18:40:00'),
+      updated_at: stamp(e.collectedOn, '18:40:00'),
+    })),
+  );
+
   const owner = who('owner');
   await insertInBatches(trx, 'audit_events', [
     {

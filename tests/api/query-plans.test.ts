@@ -228,6 +228,37 @@ describeOnSqlite('query plans of the hot reads', () => {
     }
   });
 
+  it('when the season log’s weather and sap are read, in each season, order and collection, then no statement walks a whole table', async () => {
+    const send = (url: string, body: object) =>
+      owner.agent.post(url).set('x-csrf-token', owner.csrf).send(body);
+    for (const [date, collection] of [
+      ['2025-03-10', 'vacuum'],
+      ['2025-03-11', 'bucket'],
+      ['2025-03-12', null],
+    ] as const) {
+      expect(
+        (await send(`/api/sugarbushes/${team.standId}/weather`, { date, minC: -4, maxC: 6 }))
+          .status,
+      ).toBe(201);
+      const sap = { collectedOn: date, volumeL: 80, sugarPct: 2.2, heldAtC: 3, collection };
+      expect((await send(`/api/sugarbushes/${team.standId}/sap`, sap)).status).toBe(201);
+    }
+    const urls = [
+      ...['', '?season=2025', `?season=${new Date().getUTCFullYear()}`].map(
+        (q) => `/api/sugarbushes/${team.standId}/weather${q}`,
+      ),
+      ...[
+        '',
+        '?season=2025',
+        '?season=2025&sort=-collectedOn&page=1&pageSize=2',
+        '?season=2025&collection=vacuum',
+        '?season=2025&collection=stand',
+      ].map((q) => `/api/sugarbushes/${team.standId}/sap${q}`),
+    ];
+    for (const url of urls)
+      expect({ url, offIndex: await offIndex(url) }).toEqual({ url, offIndex: [] });
+  });
+
   it("when the measuring round or a tree's record is read, then no statement walks a whole table", async () => {
     expect(await offIndex(`/api/sugarbushes/${team.standId}/round`)).toEqual([]);
     expect(await offIndex(`/api/trees/${treeId}/record`)).toEqual([]);

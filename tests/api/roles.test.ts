@@ -23,6 +23,7 @@ interface Ids {
   memberId: number;
   noteId: number;
   photoId: number;
+  sapEntryId: number;
 }
 
 const everyone: Role[] = ['owner', 'forester', 'tapper', 'consultant'];
@@ -346,6 +347,50 @@ const cases: RouteCase[] = [
     path: (i) => `/api/photos/${i.photoId}`,
     allowed: everyone,
   },
+  {
+    name: 'read the season’s weather',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/weather?season=2025`,
+    allowed: everyone,
+  },
+  {
+    name: 'record a day’s weather',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/weather`,
+    body: () => ({ date: '2025-03-10', minC: -4, maxC: 5 }),
+    allowed: ['owner', 'forester', 'tapper'],
+  },
+  {
+    name: 'check a station’s daily summaries (dry run)',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/weather/imports?dryRun=1`,
+    upload: () => ({
+      bytes: Buffer.from('STATION,DATE,TMAX (°F),TMIN (°F)\nUSC00999999,2025-03-11,44,25\n'),
+      filename: 'station.csv',
+    }),
+    allowed: ['owner', 'forester', 'tapper'],
+    okStatus: 200,
+  },
+  {
+    name: 'read the season’s sap',
+    method: 'get',
+    path: (i) => `/api/sugarbushes/${i.standId}/sap?season=2025`,
+    allowed: everyone,
+  },
+  {
+    name: 'record sap',
+    method: 'post',
+    path: (i) => `/api/sugarbushes/${i.standId}/sap`,
+    body: () => ({ collectedOn: '2025-03-10', volumeL: 120, sugarPct: 2.4, collection: 'vacuum' }),
+    allowed: ['owner', 'forester', 'tapper'],
+  },
+  {
+    name: 'correct a sap entry',
+    method: 'patch',
+    path: (i) => `/api/sap/${i.sapEntryId}`,
+    body: () => ({ volumeL: 100 + ++n }),
+    allowed: ['owner', 'forester', 'tapper'],
+  },
 ];
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
@@ -377,7 +422,12 @@ beforeAll(async () => {
     .set('x-csrf-token', agents.owner.csrf)
     .send({ season: 2026 });
   if (issued.status !== 201) throw new Error(`issuing failed: ${JSON.stringify(issued.body)}`);
+  const sap = await agents.tapper.agent
+    .post(`/api/sugarbushes/${team.standId}/sap`)
+    .set('x-csrf-token', agents.tapper.csrf)
+    .send({ collectedOn: '2025-03-09', volumeL: 90, sugarPct: 2.1 });
   ids = {
+    sapEntryId: sap.body.id,
     standId: team.standId,
     treeId: team.treeId,
     memberId,

@@ -46,7 +46,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const post = (who: Agent, body: unknown, standId = team.standId) =>
+const post = (who: Agent, body: object, standId = team.standId) =>
   who.agent.post(`/api/sugarbushes/${standId}/sap`).set('x-csrf-token', who.csrf).send(body);
 
 /**

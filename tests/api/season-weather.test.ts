@@ -291,7 +291,7 @@ describe('recording a day by hand', () => {
   });
 
   it('when a day has its high below its low, a date to come, or no low, then it is refused with 400 naming each field', async () => {
-    const post = (body: unknown) =>
+    const post = (body: object) =>
       owner.agent
         .post(`/api/sugarbushes/${team.standId}/weather`)
         .set('x-csrf-token', owner.csrf)

@@ -6,6 +6,8 @@ import { standInSeries } from './stand-in-forecast';
 export interface StandInServer {
   /** The URL to give `FORECAST_URL`. */
   url: string;
+  /** Requests answered so far. */
+  requests: () => number;
   close: () => Promise<void>;
 }
 
@@ -17,7 +19,9 @@ export interface StandInServer {
 export async function serveStandInForecast(
   today: () => string = () => isoDay(),
 ): Promise<StandInServer> {
+  let requests = 0;
   const server = http.createServer((req, res) => {
+    requests += 1;
     const url = new URL(req.url ?? '/', 'http://127.0.0.1');
     const lat = Number(url.searchParams.get('latitude'));
     const lng = Number(url.searchParams.get('longitude'));
@@ -62,6 +66,7 @@ export async function serveStandInForecast(
   const { port } = server.address() as AddressInfo;
   return {
     url: `http://127.0.0.1:${port}/v1/forecast`,
+    requests: () => requests,
     close: () =>
       new Promise<void>((resolve, reject) => {
         server.closeAllConnections();
