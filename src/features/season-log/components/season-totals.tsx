@@ -1,4 +1,5 @@
 import type { SapSeasonTotals } from '@shared/schemas/sap';
+import { WhyDisclosure } from '@/components/ui/why-disclosure';
 import { formatNumber } from '@/lib/units';
 import { formatBrix, formatVolume, type SeasonUnits } from '../lib/season-units';
 
@@ -42,17 +43,27 @@ export function SeasonTotals({
     },
   ];
   return (
-    <dl
-      aria-label={`Season ${season} totals`}
-      className="grid grid-cols-2 gap-x-6 gap-y-4 sm:grid-cols-3 lg:grid-cols-4"
-    >
-      {figures.map((f) => (
-        <div key={f.label} className="border-t border-rule pt-2">
-          <dt className="text-sm text-bark">{f.label}</dt>
-          <dd className="text-lg font-bold tabular-nums">{f.value}</dd>
-          {f.note && <dd className="text-sm text-bark">{f.note}</dd>}
-        </div>
-      ))}
-    </dl>
+    <div className="flex flex-col gap-2">
+      <dl
+        aria-label={`Season ${season} totals`}
+        className="grid grid-cols-2 gap-x-6 gap-y-4 sm:grid-cols-3 lg:grid-cols-4"
+      >
+        {figures.map((f) => (
+          <div key={f.label} className="border-t border-rule pt-2">
+            <dt className="text-sm text-bark">{f.label}</dt>
+            <dd className="text-lg font-bold tabular-nums">{f.value}</dd>
+            {f.note && <dd className="text-sm text-bark">{f.note}</dd>}
+          </div>
+        ))}
+      </dl>
+      <WhyDisclosure
+        name="Why? Syrup expected and sap per tap"
+        source="Rule of 86 (Jones, UVM): gallons of sap for a gallon of syrup = 86 ÷ sugar %. Revised for 66.0 °Brix syrup: 87.1 ÷ sugar % − 0.32 (Perkins & Isselhardt, UVM Proctor)."
+        notes={[
+          'Each entry is converted at its own sugar content, and the season adds them up.',
+          "Sap per tap divides the season's sap by the tapholes recorded for the season: on the entry's collection, or all of them for the whole stand.",
+        ]}
+      />
+    </div>
   );
 }
