@@ -373,3 +373,21 @@ describe('which season the log opens on', () => {
     expect(res.body.total).toBe(9);
   });
 });
+
+describe('the size of a station file', () => {
+  it('when a file is larger than IMPORT_MAX_BYTES, then it is refused with 413 and nothing is written', async () => {
+    const small = await makeTestApp({ IMPORT_MAX_BYTES: '300' });
+    try {
+      const t2 = await standWithTeam(small.db);
+      const who = await signIn(small.app, t2.users.owner);
+      const res = await importFile(who, t2.standId, fixture('station-standard-f.csv'), {
+        unit: 'F',
+      });
+      expect(res.status).toBe(413);
+      expect(res.body.error.code).toBe('file-too-large');
+      expect(await small.db('weather_days').count({ n: '*' })).toEqual([{ n: 0 }]);
+    } finally {
+      await small.close();
+    }
+  });
+});

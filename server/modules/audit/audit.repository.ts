@@ -32,6 +32,15 @@ const parseDetail = (text: string | null): unknown => {
   }
 };
 
+const auditRow = (e: AuditEvent) => ({
+  sugarbush_id: e.sugarbushId,
+  user_id: e.userId,
+  action: e.action,
+  entity: e.entity,
+  entity_id: e.entityId ?? null,
+  detail: e.detail === undefined ? null : JSON.stringify(e.detail),
+});
+
 export function auditRepository(db: Knex) {
   const ofStand = (sugarbushId: number, f: Pick<AuditFilter, 'kind' | 'userId'>) =>
     db('audit_events as e')
@@ -43,14 +52,13 @@ export function auditRepository(db: Knex) {
 
   return {
     record: (e: AuditEvent) => {
-      return db('audit_events').insert({
-        sugarbush_id: e.sugarbushId,
-        user_id: e.userId,
-        action: e.action,
-        entity: e.entity,
-        entity_id: e.entityId ?? null,
-        detail: e.detail === undefined ? null : JSON.stringify(e.detail),
-      });
+      return db('audit_events').insert(auditRow(e));
+    },
+
+    /** Many entries of one write (an import), a few hundred to an INSERT. */
+    async recordMany(events: AuditEvent[]): Promise<void> {
+      for (let i = 0; i < events.length; i += 150)
+        await db('audit_events').insert(events.slice(i, i + 150).map(auditRow));
     },
 
     /**

@@ -1,5 +1,4 @@
 import type { Knex } from 'knex';
-import { insertedId } from '../../lib/paging';
 import type { WeatherSource } from '../../../shared/schemas/weather';
 
 /** A day's reading as stored (°C). */
@@ -22,6 +21,8 @@ const toDay = (r: Record<string, unknown>): StoredDay => ({
 const COLUMNS = ['date', 'min_c', 'max_c', 'source', 'station'];
 /** Dates per `IN (…)` list, well under either engine's bound-variable limit. */
 const DATES_PER_QUERY = 500;
+/** Rows per INSERT: 9 values each, well under SQLite's bound-variable limit. */
+const ROWS_PER_INSERT = 100;
 
 export function weatherRepository(db: Knex) {
   return {
@@ -48,25 +49,35 @@ export function weatherRepository(db: Knex) {
       return out;
     },
 
-    /** Writes the day's reading, replacing any earlier one of that date. */
-    async put(sugarbushId: number, userId: number, day: StoredDay): Promise<number> {
+    /** Writes the days' readings, replacing any earlier ones of those dates; their ids by date. */
+    async put(
+      sugarbushId: number,
+      userId: number,
+      days: StoredDay[],
+    ): Promise<Map<string, number>> {
       const now = new Date().toISOString();
-      const [row] = await db('weather_days')
-        .insert({
-          sugarbush_id: sugarbushId,
-          date: day.date,
-          min_c: day.minC,
-          max_c: day.maxC,
-          source: day.source,
-          station: day.station,
-          recorded_by: userId,
-          created_at: now,
-          updated_at: now,
-        })
-        .onConflict(['sugarbush_id', 'date'])
-        .merge(['min_c', 'max_c', 'source', 'station', 'recorded_by', 'updated_at'])
-        .returning('id');
-      return insertedId(row);
+      const ids = new Map<string, number>();
+      for (let i = 0; i < days.length; i += ROWS_PER_INSERT) {
+        const rows: { id: number; date: string }[] = await db('weather_days')
+          .insert(
+            days.slice(i, i + ROWS_PER_INSERT).map((day) => ({
+              sugarbush_id: sugarbushId,
+              date: day.date,
+              min_c: day.minC,
+              max_c: day.maxC,
+              source: day.source,
+              station: day.station,
+              recorded_by: userId,
+              created_at: now,
+              updated_at: now,
+            })),
+          )
+          .onConflict(['sugarbush_id', 'date'])
+          .merge(['min_c', 'max_c', 'source', 'station', 'recorded_by', 'updated_at'])
+          .returning(['id', 'date']);
+        for (const r of rows) ids.set(String(r.date), Number(r.id));
+      }
+      return ids;
     },
   };
 }

@@ -82,19 +82,21 @@ export function weatherService(ctx: AppContext) {
         days.map((d) => d.date),
       );
       const changed = days.filter((d) => !before.has(d.date) || !same(before.get(d.date)!, d));
-      for (const d of changed) {
-        const id = await stored.put(sugarbushId, userId, d);
-        const earlier = before.get(d.date);
-        await audit.record({
-          sugarbushId,
-          userId,
-          action: earlier ? 'replace' : action,
-          entity: 'weather-day',
-          entityId: id,
-          // The reading it replaced stays here.
-          detail: earlier ? { ...d, earlier } : d,
-        });
-      }
+      const ids = await stored.put(sugarbushId, userId, changed);
+      await audit.recordMany(
+        changed.map((d) => {
+          const earlier = before.get(d.date);
+          return {
+            sugarbushId,
+            userId,
+            action: earlier ? 'replace' : action,
+            entity: 'weather-day',
+            entityId: ids.get(d.date) ?? null,
+            // The reading it replaced stays here.
+            detail: earlier ? { ...d, earlier } : d,
+          };
+        }),
+      );
       return { before, changed };
     });
   }
