@@ -94,11 +94,41 @@ describe('the app shell', () => {
     });
   }, 20000);
 
-  it('when a section is not built yet, then it says so calmly', async () => {
-    openApp('/sugarbushes/3/season', asRole('tapper'));
-    expect(await screen.findByRole('heading', { name: 'Season log' })).toBeInTheDocument();
-    expect(screen.getByText('Coming soon in Clearwood')).toBeInTheDocument();
-  });
+  it('when a consultant opens the season log, then it is the log itself, read only', async () => {
+    openApp('/sugarbushes/3/season', asRole('consultant'), {
+      'GET /api/sugarbushes/3/weather': {
+        season: 2026,
+        items: [],
+        total: 0,
+        forecast: [],
+        forecastSource: null,
+        forecastError: null,
+      },
+      'GET /api/sugarbushes/3/sap': {
+        items: [],
+        total: 0,
+        page: 1,
+        pageSize: 500,
+        season: 2026,
+        totals: {
+          volumeL: 0,
+          meanSugarPct: null,
+          expectedSyrupL: 0,
+          expectedSyrupLRevised: 0,
+          syrupMadeL: null,
+          taps: 0,
+          yieldPerTapL: null,
+          days: 0,
+        },
+      },
+    });
+    expect(
+      await screen.findByRole('heading', { name: 'Season log', level: 1 }, { timeout: 10000 }),
+    ).toBeInTheDocument();
+    expect(await screen.findByText('No sap recorded in 2026 yet')).toBeInTheDocument();
+    expect(screen.queryByText('Coming soon in Clearwood')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Save sap' })).toBeNull();
+  }, 20000);
 
   it('when nobody is signed in, then the account pages and an invitation open without sending them to sign-in', async () => {
     const { router } = openApp('/forgot-password', null, {

@@ -7,7 +7,8 @@ import { RouteError } from './route-error';
 import { AppShell } from './shell/app-shell';
 import type { SectionHandle } from './shell/sections';
 
-const planned: SectionKey[] = ['season'];
+/** Sections shown as "Coming soon" until they are built. */
+const planned: SectionKey[] = [];
 
 const handle = (section: SectionKey): SectionHandle => ({ section });
 
@@ -141,6 +142,13 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               handle: handle('overview'),
               lazy: async () => ({
                 Component: (await import('./routes/compliance-report')).ComplianceReportRoute,
+              }),
+            },
+            {
+              path: paths.season.path,
+              handle: handle('season'),
+              lazy: async () => ({
+                Component: (await import('./routes/season-log')).SeasonLogRoute,
               }),
             },
             {

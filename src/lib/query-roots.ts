@@ -16,4 +16,6 @@ export const queryRoots = {
   /** A tree's readings and its holes, which field entries add to. */
   measurements: ['measurements'],
   tapholes: ['tapholes'],
+  /** A stand's weather, sap and syrup by day. */
+  seasonLog: ['season-log'],
 } as const;

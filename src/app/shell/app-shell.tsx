@@ -36,7 +36,10 @@ export function AppShell() {
         Skip to content
       </a>
       <SideRail {...nav} />
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 pb-28 pt-6 md:px-8 md:pb-12">
+      <main
+        id="main"
+        className="mx-auto w-full min-w-0 max-w-6xl flex-1 px-4 pb-28 pt-6 md:px-8 md:pb-12"
+      >
         <FieldEntryStatus />
         <Outlet />
       </main>

@@ -60,8 +60,8 @@ export const sections: readonly Section[] = [
     key: 'season',
     label: 'Season log',
     shortLabel: 'Log',
-    permission: 'record-tapholes',
-    summary: 'Record each taphole as it is drilled: height, bearing, depth, bit and collection.',
+    permission: 'read',
+    summary: 'Weather, sap and syrup day by day: when the sap ran and what it should make.',
   },
   {
     key: 'settings',

@@ -6,8 +6,11 @@ const options: { system: UnitSystem; label: string }[] = [
   { system: 'metric', label: 'cm' },
 ];
 
-/** Switches every length on screen between inches and centimetres; remembered on this device. */
-export function UnitToggle() {
+/**
+ * Switches every length on screen between inches and centimetres; remembered on this device.
+ * `labels` names the choice where a page shows other quantities (°F and gallons, °C and litres).
+ */
+export function UnitToggle({ labels }: { labels?: Record<UnitSystem, string> } = {}) {
   const { system, setSystem } = useUnitSystem();
   return (
     <div role="group" aria-label="Units" className="inline-flex rounded border border-bark/40">
@@ -22,7 +25,7 @@ export function UnitToggle() {
             system === option.system ? 'bg-ink text-paper' : 'text-ink hover:bg-frost',
           )}
         >
-          {option.label}
+          {labels?.[option.system] ?? option.label}
         </button>
       ))}
     </div>
