@@ -270,3 +270,109 @@ export const queryString: fc.Arbitrary<string> = fc
   .map((pairs) =>
     pairs.map(([k, v]) => `${encodeURIComponent(k)}=${encodeURIComponent(v)}`).join('&'),
   );
+
+/**
+ * Entries that are right but for one field, whose value no record can hold: each must be refused
+ * with 400 naming that field. `base` itself is accepted (the test sends it once to prove so).
+ */
+export interface SenseCase {
+  route: string;
+  base: Record<string, unknown>;
+  nonsense: Record<string, unknown[]>;
+}
+
+const farFuture = (days: number) =>
+  new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
+const badDays = [...impossibleDates, '1949-12-31', farFuture(3), farFuture(400)];
+const badSeasons = [0, -2026, 1949, new Date().getUTCFullYear() + 2, 9999, 2026.5, '2026', null];
+
+export const senseCases: SenseCase[] = [
+  {
+    route: 'POST /api/trees/:treeId/measurements',
+    base: { measuredOn: '2025-11-01', dbhCm: 41.2, crownDiebackPct: 10 },
+    nonsense: {
+      measuredOn: badDays,
+      dbhCm: [5e-324, 1e-300, 0, -1, 2.4, 250.1, 1e308, 'NaN', '40', null],
+      crownDiebackPct: [-5, 12, 101, 1e308, 'NaN'],
+    },
+  },
+  {
+    route: 'POST /api/trees/:treeId/tapholes',
+    base: {
+      season: 2025,
+      heightCm: 100,
+      azimuthDeg: 180,
+      depthCm: 5,
+      bitCm: 0.79,
+      collection: 'vacuum',
+    },
+    nonsense: {
+      season: badSeasons,
+      heightCm: [-1, 300.1, 1e308, 'NaN'],
+      azimuthDeg: [-1, 360, 1e308, 'NaN'],
+      depthCm: [5e-324, 0.5, 8.1, 1e308, 0],
+      bitCm: [5e-324, 0.2, 1.4, 2, 1e308],
+      drilledOn: badDays,
+      collection: ['pipe', '', 1],
+    },
+  },
+  {
+    route: 'POST /api/sugarbushes/:id/trees',
+    base: { tag: 'S-100', species: 'sugar-maple', lat: 44.1, lng: -72.5 },
+    nonsense: {
+      tag: ['', ' ', 'x'.repeat(41), 5],
+      species: ['oak', ''],
+      lat: [90.1, -91, 1e308, 'NaN'],
+      lng: [180.5, -1e308, 'Infinity'],
+      status: ['gone'],
+    },
+  },
+  {
+    route: 'POST /api/trees/:treeId/notes',
+    base: { category: 'health', body: 'Bark peeling on the north side.', followUpOn: '2027-04-01' },
+    nonsense: {
+      category: ['finding', ''],
+      body: ['', ' ', 'x'.repeat(5_001)],
+      followUpOn: [...impossibleDates.filter((d) => d !== ''), '1949-12-31', farFuture(365 * 11)],
+    },
+  },
+  {
+    route: 'POST /api/sugarbushes/:id/issued-plans',
+    base: { season: 2026 },
+    nonsense: { season: badSeasons.filter((s) => s !== '2026') },
+  },
+];
+
+/** Queries no list takes: a season out of range, an order or filter it does not have. */
+export const senseQueries: { route: string; query: string; field: string }[] = [
+  ...['0', '1949', String(new Date().getUTCFullYear() + 2), '9999', 'NaN', '2026.5'].flatMap(
+    (s) => [
+      { route: 'GET /api/sugarbushes/:id/plan', query: `season=${s}`, field: 'season' },
+      { route: 'GET /api/trees/:treeId/advice', query: `season=${s}`, field: 'season' },
+      { route: 'GET /api/sugarbushes/:id/compliance', query: `season=${s}`, field: 'season' },
+      { route: 'GET /api/sugarbushes/:id/map', query: `season=${s}`, field: 'season' },
+      { route: 'GET /api/sugarbushes/:id/attention', query: `season=${s}`, field: 'season' },
+      { route: 'GET /api/sugarbushes/:id/plan/progress', query: `season=${s}`, field: 'season' },
+    ],
+  ),
+  { route: 'GET /api/sugarbushes/:id/trees', query: 'sort=height', field: 'sort' },
+  {
+    route: 'GET /api/sugarbushes/:id/trees',
+    query: 'dieback=10&diebackSeason=1900',
+    field: 'diebackSeason',
+  },
+  { route: 'GET /api/trees/:treeId/measurements', query: 'sort=dbhCm', field: 'sort' },
+  { route: 'GET /api/trees/:treeId/tapholes', query: 'sort=season', field: 'sort' },
+  { route: 'GET /api/trees/:treeId/photos', query: 'sort=size', field: 'sort' },
+  { route: 'GET /api/sugarbushes', query: 'sort=name', field: 'sort' },
+  { route: 'GET /api/sugarbushes/:id/basemaps', query: 'sort=name', field: 'sort' },
+  { route: 'GET /api/sugarbushes/:id/invitations', query: 'sort=email', field: 'sort' },
+  { route: 'GET /api/sugarbushes/:id/audit', query: 'sort=at', field: 'sort' },
+  { route: 'GET /api/sugarbushes/:id/members', query: 'sort=password', field: 'sort' },
+  { route: 'GET /api/sugarbushes/:id/notes', query: 'sort=body', field: 'sort' },
+  { route: 'GET /api/sugarbushes/:id/plan', query: 'sort=random', field: 'sort' },
+  { route: 'GET /api/sugarbushes/:id/plan', query: 'verdict=maybe', field: 'verdict' },
+  { route: 'GET /api/sugarbushes/:id/plan', query: 'warning=sleepy', field: 'warning' },
+  { route: 'GET /api/sugarbushes/:id/compliance', query: 'sort=-season', field: 'sort' },
+  { route: 'GET /api/sugarbushes/:id/attention', query: 'sort=urgency', field: 'sort' },
+];

@@ -2,7 +2,14 @@ import fc from 'fast-check';
 import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { serve, signedInClient, type Answer, type Client, type Send } from './http-client';
-import { jsonBody, multipartBody, queryString, rawJsonBody } from './fuzz-inputs';
+import {
+  jsonBody,
+  multipartBody,
+  queryString,
+  rawJsonBody,
+  senseCases,
+  senseQueries,
+} from './fuzz-inputs';
 import { apiRouteTable, type RouteInfo } from './route-table';
 import { makeTestApp } from './test-app';
 import { twoStands, type StandRows, type TwoStands } from './two-stands';
@@ -115,6 +122,8 @@ const errorShaped = (json: unknown) => {
  * (one snapshot per write); an accepted one, once its background work (mail) is done, replaces it.
  */
 let standing = '';
+/** The answer to the latest request `probe` sent. */
+let lastAnswer: Answer | undefined;
 
 /** Send one request and check it; returns false (and notes why) on a broken promise. */
 async function probe(route: RouteInfo, send: Send, query = ''): Promise<boolean> {
@@ -129,6 +138,7 @@ async function probe(route: RouteInfo, send: Send, query = ''): Promise<boolean>
     return false;
   }
   tally.requests += 1;
+  lastAnswer = res;
   const k = `${route.key} ${res.status}`;
   const e = timing.get(k) ?? [0, 0];
   timing.set(k, [e[0] + 1, e[1] + performance.now() - t0]);
@@ -198,7 +208,7 @@ describe('random and malformed requests', () => {
     started = performance.now();
     await fc.assert(
       fc.asyncProperty(route(jsonRoutes), jsonBody, (r, send) => probe(r, send)),
-      runs(4_000),
+      runs(3_500),
     );
     expect(problems).toEqual([]);
   }, 120_000);
@@ -229,6 +239,58 @@ describe('random and malformed requests', () => {
       runs(700),
     );
     expect(problems).toEqual([]);
-    expect(tally.requests).toBeGreaterThanOrEqual(10_000);
   }, 120_000);
+});
+
+describe('dates and sizes within sense', () => {
+  const byKey = new Map(routes.map((r) => [r.key, r]));
+  const named = (key: string) => {
+    const r = byKey.get(key);
+    if (!r) throw new Error(`No route ${key}`);
+    return r;
+  };
+  const fieldsOf = (a: Answer) =>
+    Object.keys((a.json as { error?: { fields?: object } })?.error?.fields ?? {});
+
+  it('when an entry is right, then it is taken (so a refusal below is the one field’s)', async () => {
+    for (const c of senseCases) {
+      const res = await owner.request('POST', pathFor(named(c.route)), { json: c.base });
+      expect(res.status, `${c.route}: ${res.text}`).toBe(201);
+    }
+    await t.ctx.background.idle();
+    standing = await snapshot(world.A);
+  });
+
+  const entries = senseCases.flatMap((c) =>
+    Object.entries(c.nonsense).flatMap(([field, values]) =>
+      values.map((value) => ({ route: c.route, field, body: { ...c.base, [field]: value } })),
+    ),
+  );
+  it(`when one field of an entry is out of sense (${entries.length} kinds), then 400 names it and nothing is written`, async () => {
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom(...entries), async ({ route: key, field, body }) => {
+        const sent = await probe(named(key), { json: body });
+        const res = lastAnswer!;
+        return sent && res.status === 400 && fieldsOf(res).includes(field);
+      }),
+      runs(600),
+    );
+    expect(problems).toEqual([]);
+  }, 120_000);
+
+  it(`when a query names a season out of range or an order a list does not have (${senseQueries.length} kinds), then 400 names it`, async () => {
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom(...senseQueries), async ({ route: key, query, field }) => {
+        const sent = await probe(named(key), {}, query);
+        const res = lastAnswer!;
+        return sent && res.status === 400 && fieldsOf(res).includes(field);
+      }),
+      runs(400),
+    );
+    expect(problems).toEqual([]);
+  }, 120_000);
+});
+
+it('when the whole run is done, then it sent at least 10,000 requests', () => {
+  expect(tally.requests).toBeGreaterThanOrEqual(10_000);
 });
