@@ -1,5 +1,7 @@
+import fs from 'node:fs';
+import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { can, type Permission } from '../../shared/schemas/permissions';
+import { can, permissions, type Permission } from '../../shared/schemas/permissions';
 import { roles, type Role } from '../../shared/schemas/enums';
 import type { PermissionRule } from '../../server/middleware/auth';
 import { anonymousClient, multipart, serve, type Client, type Send } from './http-client';
@@ -109,6 +111,46 @@ function variants(route: RouteInfo): Variant[] {
   ];
 }
 
+/** docs/route-access.md: every route and who may call it, as the walk reads it. */
+const ROUTE_DOC = path.resolve(import.meta.dirname, '../../docs/route-access.md');
+const scopeWords: Record<string, string> = {
+  'signed-in': 'anyone signed in, about their own',
+  sugarbush: 'members of the stand in `:id`',
+  tree: 'members of the tree’s stand',
+  note: 'members of the note’s stand',
+  photo: 'members of the photo’s stand',
+  basemap: 'members of the basemap’s stand',
+};
+const whoMay = (action: Permission) => `\`${action}\` (${permissions[action].join(', ')})`;
+function routeDoc(): string {
+  const line = (r: RouteInfo) => {
+    if (r.key in publicRoutes) return `| \`${r.key}\` | anyone | ${publicRoutes[r.key]} |`;
+    const rule = r.permission;
+    const role = !rule
+      ? 'every member'
+      : 'action' in rule
+        ? whoMay(rule.action)
+        : Object.entries(rule.byField)
+            .map(([field, action]) => `\`${field}\`: ${whoMay(action)}`)
+            .join('; ');
+    return `| \`${r.key}\` | ${scopeWords[r.access?.scope ?? ''] ?? '**none**'} | ${r.access?.scope === 'signed-in' ? '–' : role} |`;
+  };
+  return [
+    '# Who may call each route',
+    '',
+    'Written by `tests/api/access-matrix.test.ts` from the router itself (`tests/api/route-table.ts`);',
+    'do not edit by hand: after adding or changing a route, run',
+    '`UPDATE_ROUTE_DOC=1 npx vitest run --project server tests/api/access-matrix.test.ts`',
+    'and read the difference in review. Signed out, every route but the public ones answers 401;',
+    'a non-member 404; a member whose role lacks the action 403 (`shared/schemas/permissions.ts`).',
+    '',
+    '| route | who reaches it | whose role may |',
+    '|---|---|---|',
+    ...routes.map(line),
+    '',
+  ].join('\n');
+}
+
 const errorCode = (json: unknown) => (json as { error?: { code?: string } })?.error?.code;
 
 describe('the route table', () => {
@@ -138,6 +180,13 @@ describe('the route table', () => {
         )
         .map((r) => r.key),
     ).toEqual([]);
+  });
+
+  it('when the routes or their rules change, then docs/route-access.md says so', () => {
+    const doc = routeDoc();
+    if (process.env.UPDATE_ROUTE_DOC) fs.writeFileSync(ROUTE_DOC, doc);
+    const kept = fs.existsSync(ROUTE_DOC) ? fs.readFileSync(ROUTE_DOC, 'utf8') : '';
+    expect(kept, 'run with UPDATE_ROUTE_DOC=1 and review the difference').toBe(doc);
   });
 
   it('when a route is for anyone signed in, then it checks no role and names no stand', () => {
