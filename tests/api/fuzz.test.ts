@@ -210,7 +210,7 @@ describe('random and malformed requests', () => {
       fc.asyncProperty(route(jsonRoutes), jsonBody, (r, send) => probe(r, send)),
       runs(3_500),
     );
-    expect(problems).toEqual([]);
+    expect(problems.splice(0)).toEqual([]);
   }, 120_000);
 
   it('when bodies are malformed text (non-finite numbers, cut short, deeply nested, too large), then no 5xx and the error shape', async () => {
@@ -218,7 +218,7 @@ describe('random and malformed requests', () => {
       fc.asyncProperty(route(jsonRoutes), rawJsonBody, (r, send) => probe(r, send)),
       runs(2_500),
     );
-    expect(problems).toEqual([]);
+    expect(problems.splice(0)).toEqual([]);
   }, 120_000);
 
   it('when uploads are random files, truncated forms or broken boundaries, then no 5xx and the error shape', async () => {
@@ -226,7 +226,7 @@ describe('random and malformed requests', () => {
       fc.asyncProperty(route(multipartRoutes), multipartBody, (r, send) => probe(r, send)),
       runs(1_000),
     );
-    expect(problems).toEqual([]);
+    expect(problems.splice(0)).toEqual([]);
   }, 120_000);
 
   it('when list and filter queries hold unknown sorts, strange numbers and impossible dates, then no 5xx and the error shape', async () => {
@@ -238,7 +238,7 @@ describe('random and malformed requests', () => {
       ),
       runs(700),
     );
-    expect(problems).toEqual([]);
+    expect(problems.splice(0)).toEqual([]);
   }, 120_000);
 });
 
@@ -275,7 +275,7 @@ describe('dates and sizes within sense', () => {
       }),
       runs(600),
     );
-    expect(problems).toEqual([]);
+    expect(problems.splice(0)).toEqual([]);
   }, 120_000);
 
   it(`when a query names a season out of range or an order a list does not have (${senseQueries.length} kinds), then 400 names it`, async () => {
@@ -287,7 +287,7 @@ describe('dates and sizes within sense', () => {
       }),
       runs(400),
     );
-    expect(problems).toEqual([]);
+    expect(problems.splice(0)).toEqual([]);
   }, 120_000);
 });
 
