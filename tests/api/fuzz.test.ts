@@ -98,6 +98,7 @@ function pathFor(route: RouteInfo): string {
     token: 'a-token-that-was-never-sent-to-anyone',
     userId: extraMemberId,
     invitationId: s.invitationId,
+    ...s.extra,
   };
   return route.path.replace(/:(\w+)/g, (_m, name: string) => {
     if (values[name] === undefined) throw new Error(`No value for :${name} in fuzz.test.ts`);
@@ -169,7 +170,7 @@ async function probe(route: RouteInfo, send: Send, query = ''): Promise<boolean>
 
 beforeAll(async () => {
   served = await serve(t.app);
-  world = await twoStands(t.db, served);
+  world = await twoStands(t.db, served, new Set(routes.map((r) => r.key)));
   owner = await signedInClient(served, 'owner-a@test.example');
   extraMemberId = await world.freshMember(world.A.id);
   tables = await tableNames(t.db);

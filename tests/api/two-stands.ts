@@ -5,7 +5,7 @@ import fs from 'node:fs';
 import sharp from 'sharp';
 import type { Knex } from 'knex';
 import { roles, type Role } from '../../shared/schemas/enums';
-import type { Client} from './http-client';
+import type { Client } from './http-client';
 import { multipart, signedInClient, type Answer, type Served } from './http-client';
 import { solidPng, writeMbtiles } from './mbtiles-fixture';
 import { addMember, addSugarbush, addUser } from './test-app';
@@ -25,6 +25,8 @@ export interface StandRows {
   tapholeId: number;
   invitationId: number;
   season: number;
+  /** Rows of routes that may not exist in every build (the season log), by the parameter naming them. */
+  extra: Record<string, number>;
 }
 
 export interface TwoStands {
@@ -45,7 +47,12 @@ const ok = (res: Answer, what: string) => {
   return res.json as { id: number };
 };
 
-async function standRows(owner: Client, id: number, label: string): Promise<StandRows> {
+async function standRows(
+  owner: Client,
+  id: number,
+  label: string,
+  has: (route: string) => boolean,
+): Promise<StandRows> {
   const tree = ok(
     await owner.request('POST', `/api/sugarbushes/${id}/trees`, {
       json: { tag: `${label}-001`, species: 'sugar-maple', lat: 44.1, lng: -72.5 },
@@ -123,7 +130,26 @@ async function standRows(owner: Client, id: number, label: string): Promise<Stan
     }),
     'issuing a plan',
   );
+  // The season log, where this build has it: a day's sap and a day's weather.
+  const extra: Record<string, number> = {};
+  if (has('POST /api/sugarbushes/:id/sap')) {
+    const sap = ok(
+      await owner.request('POST', `/api/sugarbushes/${id}/sap`, {
+        json: { collectedOn: `${FIXTURE_SEASON}-03-20`, volumeL: 400, sugarPct: 2.4 },
+      }),
+      'recording sap',
+    );
+    if (sap?.id) extra.sapEntryId = sap.id;
+  }
+  if (has('POST /api/sugarbushes/:id/weather'))
+    ok(
+      await owner.request('POST', `/api/sugarbushes/${id}/weather`, {
+        json: { date: `${FIXTURE_SEASON}-03-20`, minC: -4, maxC: 6 },
+      }),
+      'recording the weather',
+    );
   return {
+    extra,
     id,
     treeId: tree.id,
     noteId: note.id,
@@ -141,7 +167,12 @@ async function standRows(owner: Client, id: number, label: string): Promise<Stan
  * Stands A and B, each with a member of every role and one of each resource, and an outsider
  * who owns a third stand of their own.
  */
-export async function twoStands(db: Knex, served: Served): Promise<TwoStands> {
+export async function twoStands(
+  db: Knex,
+  served: Served,
+  routes: ReadonlySet<string> = new Set(),
+): Promise<TwoStands> {
+  const has = (route: string) => routes.has(route);
   const a = await addSugarbush(db, 'Ash Ridge');
   const b = await addSugarbush(db, 'Birch Hollow');
   const c = await addSugarbush(db, 'Cedar Flat');
@@ -159,8 +190,8 @@ export async function twoStands(db: Knex, served: Served): Promise<TwoStands> {
   const ownerB = await signedInClient(served, 'owner-b@test.example');
   let n = 0;
   return {
-    A: await standRows(clients.owner, a, 'A'),
-    B: await standRows(ownerB, b, 'B'),
+    A: await standRows(clients.owner, a, 'A', has),
+    B: await standRows(ownerB, b, 'B', has),
     clients,
     ownerB,
     freshMember: async (standId) => {
