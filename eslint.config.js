@@ -45,6 +45,20 @@ const featureBoundaries = features.flatMap((feature) => {
   ];
 });
 
+/**
+ * Every user string reaches the page as text: these take HTML, so they are refused in the client
+ * (a fixed markup string in a Leaflet icon is the one thing allowed, as a literal).
+ */
+const htmlSink = 'This takes HTML: put user strings on the page as text (a text node, JSX).';
+const htmlSinks = [
+  "JSXAttribute[name.name='dangerouslySetInnerHTML']",
+  'AssignmentExpression > MemberExpression.left[property.name=/^(innerHTML|outerHTML)$/]',
+  'CallExpression[callee.property.name=/^(insertAdjacentHTML|createContextualFragment|parseFromString)$/]',
+  "CallExpression[callee.object.name='document'][callee.property.name=/^write(ln)?$/]",
+  'CallExpression[callee.property.name=/^(bindPopup|bindTooltip|setPopupContent|setTooltipContent|setContent)$/][arguments.0.type=/^(Literal|TemplateLiteral|BinaryExpression|Identifier)$/]',
+  "CallExpression[callee.property.name='divIcon'] Property[key.name='html'][value.type!='Literal']",
+].map((selector) => ({ selector, message: htmlSink }));
+
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'data', 'coverage', 'public'] },
   js.configs.recommended,
@@ -52,14 +66,20 @@ export default tseslint.config(
   {
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
       '@typescript-eslint/consistent-type-imports': 'error',
     },
   },
   {
     files: ['src/**/*.{ts,tsx}'],
     plugins: { 'react-hooks': reactHooks },
-    rules: reactHooks.configs.recommended.rules,
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      'no-restricted-syntax': ['error', ...htmlSinks],
+    },
   },
   {
     files: ['shared/**/*.ts'],

@@ -23,10 +23,33 @@ export interface Access {
   userId: number;
 }
 
-export const requireAuth: RequestHandler = (req, _res, next) => {
-  if (!req.user) return next(new AppError(401, 'unauthenticated', 'Sign in first'));
-  next();
-};
+/**
+ * What a route's own middleware says of who may call it, read by the access matrix
+ * (tests/api/route-table.ts walks the router and reads these tags, so no list of routes is kept
+ * by hand). `signed-in`: anyone signed in, about their own things; the others: a member of the
+ * stand holding the row the path names, or 404.
+ */
+export type AccessScope =
+  'signed-in' | 'sugarbush' | 'tree' | 'note' | 'photo' | 'sap-entry' | 'basemap';
+export interface AccessRule {
+  scope: AccessScope;
+  /** The path parameter naming the row. */
+  param?: string;
+}
+/** The role check of a route: one action, or one action per field of the body. */
+export type PermissionRule = { action: Permission } | { byField: Record<string, Permission> };
+
+/** Mark a middleware with the access rule it enforces. */
+export const withAccess = <T extends RequestHandler>(fn: T, access: AccessRule) =>
+  Object.assign(fn, { access });
+
+export const requireAuth: RequestHandler = withAccess(
+  (req, _res, next) => {
+    if (!req.user) return next(new AppError(401, 'unauthenticated', 'Sign in first'));
+    next();
+  },
+  { scope: 'signed-in' },
+);
 
 export const currentUser = (req: Request) => {
   if (!req.user) throw new AppError(401, 'unauthenticated', 'Sign in first');
@@ -44,29 +67,39 @@ const idParam = (raw: unknown, what: string) => {
 /** Member of the sugarbush in `:id`, or 404: a non-member learns nothing of its existence. */
 export function sugarbushAccess(db: Knex, param = 'id'): RequestHandler {
   const members = membersRepository(db);
-  return async (req, res, next) => {
-    const user = currentUser(req);
-    const sugarbushId = idParam(req.params[param], 'Sugarbush');
-    const role = await members.roleOf(user.id, sugarbushId);
-    if (!role) throw new AppError(404, 'not-found', 'Sugarbush not found');
-    res.locals.access = { sugarbushId, role, userId: user.id } satisfies Access;
-    next();
-  };
+  return withAccess(
+    async (req, res, next) => {
+      const user = currentUser(req);
+      const sugarbushId = idParam(req.params[param], 'Sugarbush');
+      const role = await members.roleOf(user.id, sugarbushId);
+      if (!role) throw new AppError(404, 'not-found', 'Sugarbush not found');
+      res.locals.access = { sugarbushId, role, userId: user.id } satisfies Access;
+      next();
+    },
+    { scope: 'sugarbush', param },
+  );
 }
 
 /** Member of the sugarbush holding the tree in `:treeId`, or 404 for the tree. */
 export function treeAccess(db: Knex): RequestHandler {
   const members = membersRepository(db);
-  return async (req, res, next) => {
-    const user = currentUser(req);
-    const treeId = idParam(req.params.treeId, 'Tree');
-    const tree = await db('trees').where({ id: treeId }).first('id', 'sugarbush_id');
-    const role = tree ? await members.roleOf(user.id, tree.sugarbush_id) : null;
-    if (!tree || !role) throw new AppError(404, 'not-found', 'Tree not found');
-    res.locals.access = { sugarbushId: tree.sugarbush_id, role, userId: user.id } satisfies Access;
-    res.locals.treeId = treeId;
-    next();
-  };
+  return withAccess(
+    async (req, res, next) => {
+      const user = currentUser(req);
+      const treeId = idParam(req.params.treeId, 'Tree');
+      const tree = await db('trees').where({ id: treeId }).first('id', 'sugarbush_id');
+      const role = tree ? await members.roleOf(user.id, tree.sugarbush_id) : null;
+      if (!tree || !role) throw new AppError(404, 'not-found', 'Tree not found');
+      res.locals.access = {
+        sugarbushId: tree.sugarbush_id,
+        role,
+        userId: user.id,
+      } satisfies Access;
+      res.locals.treeId = treeId;
+      next();
+    },
+    { scope: 'tree', param: 'treeId' },
+  );
 }
 
 /**
@@ -80,22 +113,31 @@ function rowAccess(
   what: string,
 ): RequestHandler {
   const members = membersRepository(db);
-  return async (req, res, next) => {
-    const user = currentUser(req);
-    const id = idParam(req.params[param], what);
-    const row = await db(table)
-      .where({ id })
-      .first('id', 'sugarbush_id', table === 'sap_entries' ? db.raw('null as tree_id') : 'tree_id');
-    const role = row ? await members.roleOf(user.id, row.sugarbush_id) : null;
-    if (!row || !role) throw new AppError(404, 'not-found', `${what} not found`);
-    res.locals.access = { sugarbushId: row.sugarbush_id, role, userId: user.id } satisfies Access;
-    res.locals.row = {
-      id,
-      sugarbushId: Number(row.sugarbush_id),
-      treeId: row.tree_id === null ? null : Number(row.tree_id),
-    } satisfies AccessedRow;
-    next();
-  };
+  const scope: AccessScope =
+    table === 'notes' ? 'note' : table === 'photos' ? 'photo' : 'sap-entry';
+  return withAccess(
+    async (req, res, next) => {
+      const user = currentUser(req);
+      const id = idParam(req.params[param], what);
+      const row = await db(table)
+        .where({ id })
+        .first(
+          'id',
+          'sugarbush_id',
+          table === 'sap_entries' ? db.raw('null as tree_id') : 'tree_id',
+        );
+      const role = row ? await members.roleOf(user.id, row.sugarbush_id) : null;
+      if (!row || !role) throw new AppError(404, 'not-found', `${what} not found`);
+      res.locals.access = { sugarbushId: row.sugarbush_id, role, userId: user.id } satisfies Access;
+      res.locals.row = {
+        id,
+        sugarbushId: Number(row.sugarbush_id),
+        treeId: row.tree_id === null ? null : Number(row.tree_id),
+      } satisfies AccessedRow;
+      next();
+    },
+    { scope, param },
+  );
 }
 
 export interface AccessedRow {
@@ -117,10 +159,11 @@ export const sapEntryAccess = (db: Knex) => rowAccess(db, 'sap_entries', 'entryI
 
 /** The member's role must allow the action (the table in shared/schemas/permissions.ts), else 403. */
 export function requirePermission(action: Permission): RequestHandler {
-  return (_req, res, next) => {
+  const check: RequestHandler = (_req, res, next) => {
     if (!can(accessOf(res)?.role, action)) return next(forbidden());
     next();
   };
+  return Object.assign(check, { permission: { action } satisfies PermissionRule });
 }
 
 /**
@@ -130,7 +173,7 @@ export function requirePermission(action: Permission): RequestHandler {
  */
 export function requireFieldPermissions(byField: Record<string, Permission>): RequestHandler {
   const all = [...new Set(Object.values(byField))];
-  return (req, res, next) => {
+  const check: RequestHandler = (req, res, next) => {
     const role = accessOf(res)?.role;
     const body = (req.body ?? {}) as Record<string, unknown>;
     const present = Object.keys(byField).filter((field) => body[field] !== undefined);
@@ -141,4 +184,5 @@ export function requireFieldPermissions(byField: Record<string, Permission>): Re
     if (!allowed) return next(forbidden());
     next();
   };
+  return Object.assign(check, { permission: { byField } satisfies PermissionRule });
 }

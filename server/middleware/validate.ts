@@ -17,9 +17,24 @@ interface Schemas {
   params?: ZodType;
 }
 
+/**
+ * What a route reads from the request, as its middleware says (read by tests/api/route-table.ts
+ * to fuzz every route that takes a body or a query): `body: 'json'` from `validate({ body })`,
+ * `'multipart'` from an upload receiver.
+ */
+export interface ReadsTag {
+  body?: 'json' | 'multipart';
+  query?: boolean;
+  params?: boolean;
+}
+
+/** Mark an upload receiver (multer) as reading a multipart body. */
+export const readsMultipart = <T extends RequestHandler>(fn: T) =>
+  Object.assign(fn, { reads: { body: 'multipart' } satisfies ReadsTag });
+
 /** Parse body, query and params; parsed values land in `res.locals.body/query/params`. */
 export function validate(schemas: Schemas): RequestHandler {
-  return (req, res, next) => {
+  const check: RequestHandler = (req, res, next) => {
     const fields: Record<string, string> = {};
     for (const part of ['params', 'query', 'body'] as const) {
       const schema = schemas[part];
@@ -33,6 +48,12 @@ export function validate(schemas: Schemas): RequestHandler {
     }
     next();
   };
+  const reads: ReadsTag = {
+    ...(schemas.body ? { body: 'json' } : {}),
+    query: !!schemas.query,
+    params: !!schemas.params,
+  };
+  return Object.assign(check, { reads });
 }
 
 /** The parsed value of a validated part, typed by the caller. */

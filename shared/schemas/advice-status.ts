@@ -1,8 +1,9 @@
 import { z } from 'zod';
+import { seasonSchema } from './plan';
 
 /** `GET /api/sugarbushes/:id/advice-status?season=`: whether the stand's stored advice is current. */
 export const adviceStatusQuerySchema = z.object({
-  season: z.coerce.number().int().min(1990).max(2200).optional(),
+  season: seasonSchema.optional(),
 });
 
 export interface AdviceStatus {

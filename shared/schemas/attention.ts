@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { warningCodes, type VerdictKey, type WarningCode } from '../rules/index';
 import type { treeStatusSchema } from './enums';
 import { listQuerySchema } from './list-query';
+import { seasonSchema } from './plan';
 
 /**
  * Why a tree is in the "needs a look" queue, most pressing first: an unresolved hazard note, a
@@ -21,7 +22,7 @@ export const attentionWarnings: readonly WarningCode[] = warningCodes.filter(
 export const attentionSorts = ['priority', 'tag', '-tag', 'followUp', '-followUp'] as const;
 
 export const attentionQuerySchema = listQuerySchema.extend({
-  season: z.coerce.number().int().min(1990).max(2200).optional(),
+  season: seasonSchema.optional(),
   sort: z.enum(attentionSorts).optional(),
   reason: z.enum(attentionReasons).optional(),
   /** Only trees whose advice carries this warning (any warning, also those the queue leaves out). */

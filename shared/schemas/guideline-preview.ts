@@ -1,12 +1,13 @@
 import { z } from 'zod';
 import type { VerdictKey } from '../rules/index';
+import { seasonNumberSchema } from './plan';
 
 /**
  * `POST /api/sugarbushes/:id/guideline-preview` (owner): what choosing this guideline would do to
  * the season's plan, before saving. `profile` is a profile key or `custom` with `customProfile`.
  */
 export const guidelinePreviewInputSchema = z.object({
-  season: z.number().int().min(1990).max(2200).optional(),
+  season: seasonNumberSchema.optional(),
   profile: z.string().min(1).max(40),
   customProfile: z.unknown().optional(),
 });

@@ -1,25 +1,22 @@
 import { z } from 'zod';
+import { recordedDaySchema } from './iso-date';
+import { sortedListQuery } from './list-query';
 
-export const DBH_MAX_CM = 400;
+/**
+ * The DBH a reading may give: from 1 in (2.5 cm), below which a stem is no tree to record, to
+ * 250 cm, beyond the largest sugar maples on record (common practice; from memory).
+ */
+export const DBH_MIN_CM = 2.5;
+export const DBH_MAX_CM = 250;
 
 /** Crown dieback is rated in 5 % classes (USFS Crown Condition Rating Guide, Millers et al. 1992). */
 export const crownDiebackClasses = Array.from({ length: 21 }, (_, i) => i * 5);
 
-const isoDate = z
-  .string()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date as YYYY-MM-DD')
-  .refine(
-    (s) =>
-      !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) &&
-      new Date(`${s}T00:00:00Z`).toISOString().startsWith(s),
-    'Not a real date',
-  );
-
 export const measurementInputSchema = z.object({
-  measuredOn: isoDate,
+  measuredOn: recordedDaySchema,
   dbhCm: z
     .number({ error: 'Enter the diameter' })
-    .gt(0, 'Diameter must be more than 0')
+    .min(DBH_MIN_CM, `Diameter must be at least ${DBH_MIN_CM} cm`)
     .max(DBH_MAX_CM, `Diameter must be at most ${DBH_MAX_CM} cm`),
   crownDiebackPct: z
     .number()
@@ -43,6 +40,10 @@ export const measurementInputSchema = z.object({
   clientId: z.string().uuid('A client id is a UUID').optional(),
 });
 export type MeasurementInput = z.infer<typeof measurementInputSchema>;
+
+/** A tree's readings, oldest first or (`-measuredOn`) newest first. */
+export const measurementListQuerySchema = sortedListQuery(['measuredOn', '-measuredOn']);
+export type MeasurementListQuery = z.output<typeof measurementListQuerySchema>;
 
 export interface Measurement {
   id: number;

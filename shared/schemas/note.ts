@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { noteCategorySchema } from './enums';
-import { isoDateSchema } from './iso-date';
+import { plannedDaySchema } from './iso-date';
 import { listQuerySchema } from './list-query';
 import type { Photo } from './photo';
 
@@ -10,7 +10,7 @@ export const FOLLOW_UP_DUE_DAYS = 14;
 export const noteInputSchema = z.object({
   category: noteCategorySchema,
   body: z.string().trim().min(1, 'Write the note').max(5000, 'A note has at most 5,000 characters'),
-  followUpOn: isoDateSchema.nullable().optional(),
+  followUpOn: plannedDaySchema.nullable().optional(),
 });
 export type NoteInput = z.infer<typeof noteInputSchema>;
 
@@ -18,7 +18,7 @@ export type NoteInput = z.infer<typeof noteInputSchema>;
 export const noteChangeSchema = z
   .object({
     resolved: z.boolean().optional(),
-    followUpOn: isoDateSchema.nullable().optional(),
+    followUpOn: plannedDaySchema.nullable().optional(),
   })
   .strict()
   .refine((v) => v.resolved !== undefined || v.followUpOn !== undefined, {

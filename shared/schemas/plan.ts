@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import type { Advice, GuidelineRule, PlanTotals, ProfileSpacing } from '../rules/index';
+import { verdicts } from '../rules/verdicts';
+import { warningCodes } from '../rules/warnings';
 import { listQuerySchema } from './list-query';
 import type { Hazard } from './note';
 import { shareBandKeys } from './share-bands';
@@ -13,8 +15,25 @@ export function upcomingSeason(today: Date = new Date()): number {
   return today.getUTCMonth() >= 5 ? year + 1 : year;
 }
 
-/** `?season=` as every route takes it: a year from 1990. */
-export const seasonSchema = z.coerce.number().int().min(1990).max(2200);
+/** The first season a record or a plan may name. */
+export const FIRST_SEASON = 1950;
+
+/**
+ * The last: next year's. From June the plan is for next season (`upcomingSeason`), so next year
+ * is the furthest anything is planned; nothing is recorded for a season beyond it.
+ */
+export const lastSeason = (today: Date = new Date()): number => today.getUTCFullYear() + 1;
+
+const seasonWords = () => `Give a season from ${FIRST_SEASON} to ${lastSeason()}`;
+
+/** A season in a JSON body: a whole year from 1950 to next year (checked on the day). */
+export const seasonNumberSchema = z
+  .number({ error: 'Give the season as a year' })
+  .int({ error: seasonWords })
+  .refine((s) => s >= FIRST_SEASON && s <= lastSeason(), { error: seasonWords });
+
+/** `?season=` (and a season in a path) as every route takes it: the same years, from text. */
+export const seasonSchema = z.coerce.number().pipe(seasonNumberSchema);
 const season = seasonSchema;
 
 export const adviceQuerySchema = z.object({ season: season.optional() });
@@ -30,8 +49,8 @@ export const planQuerySchema = listQuerySchema.extend({
    */
   fromLat: z.coerce.number().min(-90).max(90).optional(),
   fromLng: z.coerce.number().min(-180).max(180).optional(),
-  verdict: z.string().max(20).optional(),
-  warning: z.string().max(30).optional(),
+  verdict: z.enum(verdicts.map((v) => v.key) as [string, ...string[]]).optional(),
+  warning: z.enum(warningCodes).optional(),
   /** Trees big enough to tap whose conductive share lies in one band (`shareBands`). */
   share: z.enum(shareBandKeys).optional(),
 });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { SapCaution } from '../rules/season-log';
 import { collectionSchema } from './enums';
-import { isoDateSchema, isoDay } from './iso-date';
+import { FIRST_RECORDED_DAY, isoDateSchema, isoDay } from './iso-date';
 import { listQuerySchema } from './list-query';
 import { seasonSchema } from './plan';
 
@@ -12,7 +12,7 @@ import { seasonSchema } from './plan';
 export const sapEntryInputSchema = z
   .object({
     collectedOn: isoDateSchema
-      .refine((d) => d >= '1950-01-01', 'Give a date from 1950 on')
+      .refine((d) => d >= FIRST_RECORDED_DAY, 'Give a date from 1950 on')
       .refine((d) => d <= isoDay(new Date(), 1), 'Sap cannot be collected in the future'),
     volumeL: z
       .number({ error: 'Give the volume of sap' })

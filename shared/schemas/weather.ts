@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { RunClass } from '../rules/season-log';
-import { isoDateSchema, isoDay } from './iso-date';
+import { FIRST_RECORDED_DAY, isoDateSchema, isoDay } from './iso-date';
 import { seasonSchema } from './plan';
 
 /** The coldest and warmest daily readings the log takes, in °C (beyond any record in maple country). */
@@ -17,7 +17,7 @@ const celsius = (what: string) =>
 export const weatherDayInputSchema = z
   .object({
     date: isoDateSchema
-      .refine((d) => d >= '1950-01-01', 'Give a date from 1950 on')
+      .refine((d) => d >= FIRST_RECORDED_DAY, 'Give a date from 1950 on')
       .refine(
         (d) => d <= isoDay(new Date(), 1),
         'A recorded day cannot be in the future; the forecast comes on its own',

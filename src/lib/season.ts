@@ -1,8 +1,7 @@
-import { upcomingSeason } from '@shared/schemas/plan';
+import { FIRST_SEASON, lastSeason, upcomingSeason } from '@shared/schemas/plan';
 
-/** The seasons the advisor will plan; the API takes 1990 on. */
-export const FIRST_SEASON = 1990;
-export const lastSeason = (today = new Date()) => upcomingSeason(today) + 10;
+/** The seasons the API takes (`seasonSchema`): 1950 to next year. */
+export { FIRST_SEASON, lastSeason };
 
 /** A `?season=` value, or the upcoming season when it is missing or out of range. */
 export function parseSeason(value: string | null, today = new Date()): number {

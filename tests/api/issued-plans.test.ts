@@ -8,9 +8,12 @@ import type {
   SeasonProgress,
 } from '../../shared/schemas/issued-plan';
 import { upcomingSeason, type StandPlanResponse } from '../../shared/schemas/plan';
+import { isoDay } from '../../shared/schemas/iso-date';
 import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
 
 const season = upcomingSeason();
+/** A reading is never dated ahead of today: from June on, `season - 1` is this year. */
+const notAfterToday = (day: string) => (day > isoDay() ? isoDay() : day);
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let team: Awaited<ReturnType<typeof standWithTeam>>;
 let owner: Awaited<ReturnType<typeof signIn>>;
@@ -37,7 +40,7 @@ beforeAll(async () => {
     trees[tag] = await addTree(t.db, team.standId, tag, { lat: 45 + step * 0.0001, lng: -72 });
     await t.db('measurements').insert({
       tree_id: trees[tag],
-      measured_on: `${season - 1}-10-01`,
+      measured_on: `${season - 1}-01-10`,
       season: season - 1,
       dbh_cm: dbhCm,
     });
@@ -165,7 +168,7 @@ describe('issuing a season’s plan', () => {
     });
     expect(drilled.status, JSON.stringify(drilled.body)).toBe(201);
     const measured = await post(forester, `/api/trees/${trees['P-05']}/measurements`, {
-      measuredOn: `${season - 1}-11-02`,
+      measuredOn: notAfterToday(`${season - 1}-11-02`),
       dbhCm: 47.2,
     });
     expect(measured.status, JSON.stringify(measured.body)).toBe(201);
@@ -179,7 +182,7 @@ describe('issuing a season’s plan', () => {
     expect(
       (
         await post(owner, `/api/trees/${added.body.id}/measurements`, {
-          measuredOn: `${season - 1}-10-03`,
+          measuredOn: notAfterToday(`${season - 1}-10-03`),
           dbhCm: 44,
         })
       ).status,
@@ -321,7 +324,7 @@ describe('season progress and the field sheet', () => {
   });
 
   it('when a season was never issued, then progress plans from today’s advice', async () => {
-    const other = season + 1;
+    const other = season - 1;
     const res = await tapper.agent.get(
       `/api/sugarbushes/${team.standId}/plan/progress?season=${other}`,
     );

@@ -37,6 +37,29 @@ describe('sign-in throttles that hold', () => {
     expect(await attempts(app, tries)).toEqual([401, 401, 401, 429, 429]);
   });
 
+  it('when a sign-in or reset names an address far too long, or not text, then 400 and its count still holds', async () => {
+    const { app, db } = await setup();
+    const { agent, csrf } = await csrfAgent(app);
+    const long = `${'x'.repeat(100_000)}@test.example`;
+    for (const email of [long, long, { nested: ['x'.repeat(1_000)] }]) {
+      const login = await agent
+        .post('/api/auth/login')
+        .set('x-csrf-token', csrf)
+        .send({ email, password: 'wrong-password' });
+      expect(login.status, JSON.stringify(login.body)).toBe(400);
+      expect(login.body.error.fields.email).toBeDefined();
+    }
+    const reset = await agent
+      .post('/api/auth/password-reset')
+      .set('x-csrf-token', csrf)
+      .send({ email: long });
+    expect(reset.status, JSON.stringify(reset.body)).toBe(400);
+    // Every key the limits keep fits the column, however long the name sent.
+    const buckets = (await db('rate_limits').pluck('bucket')) as string[];
+    expect(Math.max(...buckets.map((b) => b.length))).toBeLessThanOrEqual(400);
+    expect(buckets.filter((b) => b.includes('account-digest:')).length).toBeGreaterThan(0);
+  });
+
   it('when many accounts are tried from one address, then the address is throttled', async () => {
     const { app } = await setup();
     const tries = [1, 2, 3, 4].map((i) => ({ email: `guess${i}@test.example` }));

@@ -26,9 +26,12 @@ describe('bad input gets a clear error and writes nothing', () => {
   });
 
   it.each([
-    [0, 'more than 0'],
-    [-3, 'more than 0'],
-    [400.5, 'at most 400'],
+    [0, 'at least 2.5'],
+    [-3, 'at least 2.5'],
+    [2.4, 'at least 2.5'],
+    [250.5, 'at most 250'],
+    [5e-324, 'at least 2.5'],
+    [1e308, 'at most 250'],
   ])('when DBH is %s cm, then 400 with a field error on dbhCm', async (dbhCm, message) => {
     const res = await post(`/api/trees/${team.treeId}/measurements`).send({
       measuredOn: '2026-10-01',
@@ -49,10 +52,10 @@ describe('bad input gets a clear error and writes nothing', () => {
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['crownDiebackPct', 'measuredOn']);
   });
 
-  it('when DBH is exactly 400 cm, then it is accepted (the upper edge is inclusive)', async () => {
+  it('when DBH is exactly 250 cm, then it is accepted (the upper edge is inclusive)', async () => {
     const res = await post(`/api/trees/${team.treeId}/measurements`).send({
       measuredOn: '2026-10-01',
-      dbhCm: 400,
+      dbhCm: 250,
     });
     expect(res.status).toBe(201);
     expect(res.body.season).toBe(2026);

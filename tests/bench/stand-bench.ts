@@ -5,6 +5,7 @@
  */
 import { performance } from 'node:perf_hooks';
 import { busyWindow, type BusyWindow } from './machine';
+import { isoDay } from '../../shared/schemas/iso-date';
 import { load, ok, timed, type LoadFigures, type Session } from './http';
 
 export const CONNECTIONS = 20;
@@ -153,9 +154,11 @@ export async function afterMeasurements(
   await settle(s);
   const posts: number[] = [];
   const adviceReads: number[] = [];
+  // A reading is never dated ahead of today: from June on, `season - 1` is this year.
+  const measuredOn = `${season - 1}-11-20` > isoDay() ? isoDay() : `${season - 1}-11-20`;
   for (const t of trees) {
     const post = await ok(s, 'POST', `/api/trees/${t.id}/measurements`, {
-      measuredOn: `${season - 1}-11-20`,
+      measuredOn,
       dbhCm: Math.round((t.latestDbhCm + 0.2) * 10) / 10,
       crownDiebackPct: 0,
     });

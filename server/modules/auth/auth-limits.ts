@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import type { Request } from 'express';
 import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
 import type { Knex } from 'knex';
@@ -7,11 +8,23 @@ import { DatabaseRateLimitStore } from './rate-limit-store';
 
 const WINDOW_MS = 15 * 60_000;
 
-/** The account an attempt names, as the sign-in compares it. */
-const accountKey = (req: Request) =>
-  `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '')
-    .trim()
-    .toLowerCase()}`;
+/** Longest address an account may have (`emailSchema`); anything longer names no account. */
+const MAX_EMAIL = 254;
+
+/**
+ * The account an attempt names, as the sign-in compares it. The count runs before the body is
+ * checked, so a name no address could be (too long, not text) is counted by its digest: the key
+ * stays short enough for the `rate_limits` column whatever was sent.
+ */
+const accountKey = (req: Request) => {
+  const raw = (req.body as { email?: unknown } | undefined)?.email ?? '';
+  const email = typeof raw === 'string' ? raw.trim().toLowerCase() : null;
+  if (email !== null && email.length <= MAX_EMAIL) return `account:${email}`;
+  const text = typeof raw === 'string' ? raw : JSON.stringify(raw);
+  return `account-digest:${createHash('sha256')
+    .update(text ?? '')
+    .digest('hex')}`;
+};
 
 /** The client's address: the socket's, or a configured proxy's `X-Forwarded-For` (TRUST_PROXY). */
 const addressKey = (req: Request) => `address:${ipKeyGenerator(req.ip ?? '')}`;

@@ -1,9 +1,15 @@
 import { Router } from 'express';
 import type { AppContext } from '../../context';
-import { accessOf, currentUser, requirePermission, sugarbushAccess } from '../../middleware/auth';
+import {
+  accessOf,
+  currentUser,
+  requirePermission,
+  sugarbushAccess,
+  withAccess,
+} from '../../middleware/auth';
 import { parsed, validate } from '../../middleware/validate';
 import { listQuerySchema, type ListQuery } from '../../../shared/schemas/list-query';
-import { basemapMimeTypes } from '../../../shared/schemas/map';
+import { basemapMimeTypes, type Basemap } from '../../../shared/schemas/map';
 import { basemapsService } from './basemaps.service';
 import { receiveBasemap } from './receive-upload';
 import { parseTileCoords } from './tile-coords';
@@ -16,6 +22,14 @@ export function basemapsRoutes(ctx: AppContext, tiles: TileStore = tileStore()) 
   const router = Router();
   const service = basemapsService(ctx, tiles);
   const member = sugarbushAccess(ctx.db);
+  /** A member of the stand the basemap belongs to, or 404 for the basemap. */
+  const basemapMember = withAccess(
+    async (req, res, next) => {
+      res.locals.basemap = await service.visible(currentUser(req).id, req.params.basemapId);
+      next();
+    },
+    { scope: 'basemap', param: 'basemapId' },
+  );
 
   router.get(
     '/sugarbushes/:id/basemaps',
@@ -36,9 +50,13 @@ export function basemapsRoutes(ctx: AppContext, tiles: TileStore = tileStore()) 
     },
   );
 
-  router.get('/basemaps/:basemapId/:z/:x/:y', async (req, res) => {
-    const basemap = await service.visible(currentUser(req).id, req.params.basemapId);
-    const answer = service.tile(basemap, parseTileCoords(req.params), req.get('if-none-match'));
+  router.get('/basemaps/:basemapId/:z/:x/:y', basemapMember, async (req, res) => {
+    const basemap = res.locals.basemap as Basemap;
+    const answer = service.tile(
+      basemap,
+      parseTileCoords(req.params as Record<string, string>),
+      req.get('if-none-match'),
+    );
     res.set('Cache-Control', CACHE_CONTROL);
     if (answer.status === 204) return res.status(204).end();
     res.set('ETag', answer.etag);

@@ -4,6 +4,7 @@ import type { RequestHandler } from 'express';
 import multer from 'multer';
 import type { Config } from '../../config';
 import { AppError } from '../../errors';
+import { readsMultipart } from '../../middleware/validate';
 
 /** Remove a file if it is there; a file already gone is fine. */
 export function removeQuietly(file: string | undefined) {
@@ -30,7 +31,7 @@ export function receiveBasemap(config: Config): RequestHandler {
     defParamCharset: 'utf8',
   }).single('file');
 
-  return (req, res, next) => {
+  return readsMultipart((req, res, next) => {
     upload(req, res, (err: unknown) => {
       if (!err) {
         if (!req.file)
@@ -68,5 +69,5 @@ export function receiveBasemap(config: Config): RequestHandler {
         );
       next(err);
     });
-  };
+  });
 }

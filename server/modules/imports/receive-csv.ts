@@ -3,6 +3,7 @@ import multer from 'multer';
 import type { Config } from '../../config';
 import { AppError } from '../../errors';
 import { sizeLabel } from '../basemaps/receive-upload';
+import { readsMultipart } from '../../middleware/validate';
 
 const chooseOne = 'Choose a CSV (or, for trees, GPX) file to import';
 
@@ -23,7 +24,7 @@ export function receiveCsv(config: Config): RequestHandler {
     defParamCharset: 'utf8',
   }).single('file');
 
-  return (req, res, next) => {
+  return readsMultipart((req, res, next) => {
     upload(req, res, (err: unknown) => {
       if (!err) {
         if (!req.file)
@@ -48,5 +49,5 @@ export function receiveCsv(config: Config): RequestHandler {
         );
       next(err);
     });
-  };
+  });
 }

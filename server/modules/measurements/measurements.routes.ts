@@ -2,8 +2,12 @@ import { Router } from 'express';
 import type { AppContext } from '../../context';
 import { accessOf, requirePermission, treeAccess } from '../../middleware/auth';
 import { parsed, validate } from '../../middleware/validate';
-import { listQuerySchema, type ListQuery } from '../../../shared/schemas/list-query';
-import { measurementInputSchema, type MeasurementInput } from '../../../shared/schemas/measurement';
+import {
+  measurementInputSchema,
+  measurementListQuerySchema,
+  type MeasurementInput,
+  type MeasurementListQuery,
+} from '../../../shared/schemas/measurement';
 import { measurementsService } from './measurements.service';
 
 export function measurementsRoutes(ctx: AppContext) {
@@ -13,9 +17,9 @@ export function measurementsRoutes(ctx: AppContext) {
   router.get(
     '/trees/:treeId/measurements',
     treeAccess(ctx.db),
-    validate({ query: listQuerySchema }),
+    validate({ query: measurementListQuerySchema }),
     async (_req, res) => {
-      res.json(await service.list(res.locals.treeId, parsed<ListQuery>(res, 'query')));
+      res.json(await service.list(res.locals.treeId, parsed<MeasurementListQuery>(res, 'query')));
     },
   );
 

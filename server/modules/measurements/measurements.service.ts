@@ -1,8 +1,12 @@
 import type { AppContext } from '../../context';
 import { AppError } from '../../errors';
 import { auditRepository } from '../audit/audit.repository';
-import type { ListQuery, Page } from '../../../shared/schemas/list-query';
-import type { Measurement, MeasurementInput } from '../../../shared/schemas/measurement';
+import type { Page } from '../../../shared/schemas/list-query';
+import type {
+  Measurement,
+  MeasurementInput,
+  MeasurementListQuery,
+} from '../../../shared/schemas/measurement';
 import { measurementsRepository } from './measurements.repository';
 import { checkNewReading, readingQuestion, seasonOf } from '../../../shared/rules/index';
 import { pageOf } from '../../lib/paging';
@@ -68,7 +72,7 @@ export function measurementsService(ctx: AppContext) {
   }
 
   return {
-    async list(treeId: number, q: ListQuery): Promise<Page<Measurement>> {
+    async list(treeId: number, q: MeasurementListQuery): Promise<Page<Measurement>> {
       return pageOf(q, (range) =>
         repo.listForTree(treeId, { ...range, desc: q.sort === '-measuredOn' }),
       );

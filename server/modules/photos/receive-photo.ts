@@ -3,6 +3,7 @@ import multer from 'multer';
 import type { Config } from '../../config';
 import { AppError } from '../../errors';
 import { sizeLabel } from '../basemaps/receive-upload';
+import { readsMultipart } from '../../middleware/validate';
 
 const chooseOne = 'Choose a photo to upload';
 const oneFile = 'Send one photo, in the field "file"';
@@ -18,7 +19,7 @@ export function receivePhoto(config: Config): RequestHandler {
     defParamCharset: 'utf8',
   }).single('file');
 
-  return (req, res, next) => {
+  return readsMultipart((req, res, next) => {
     upload(req, res, (err: unknown) => {
       if (!err) {
         if (!req.file)
@@ -47,5 +48,5 @@ export function receivePhoto(config: Config): RequestHandler {
         return next(new AppError(400, 'invalid-input', oneFile, { file: oneFile }));
       next(err);
     });
-  };
+  });
 }

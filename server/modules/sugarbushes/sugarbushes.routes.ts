@@ -4,6 +4,7 @@ import type { AppContext } from '../../context';
 import {
   accessOf,
   currentUser,
+  requireAuth,
   requireFieldPermissions,
   sugarbushAccess,
 } from '../../middleware/auth';
@@ -17,14 +18,25 @@ export function sugarbushesRoutes(ctx: AppContext) {
   const service = sugarbushesService(ctx);
   const member = sugarbushAccess(ctx.db);
 
-  router.get('/sugarbushes', validate({ query: listQuerySchema }), async (req, res) => {
-    res.json(await service.list(currentUser(req).id, parsed<ListQuery>(res, 'query')));
-  });
+  // Any signed-in person lists the stands they belong to, and may start one of their own.
+  router.get(
+    '/sugarbushes',
+    requireAuth,
+    validate({ query: listQuerySchema }),
+    async (req, res) => {
+      res.json(await service.list(currentUser(req).id, parsed<ListQuery>(res, 'query')));
+    },
+  );
 
-  router.post('/sugarbushes', validate({ body: sugarbushInputSchema }), async (req, res) => {
-    const body = parsed<z.output<typeof sugarbushInputSchema>>(res, 'body');
-    res.status(201).json(await service.create(currentUser(req).id, body));
-  });
+  router.post(
+    '/sugarbushes',
+    requireAuth,
+    validate({ body: sugarbushInputSchema }),
+    async (req, res) => {
+      const body = parsed<z.output<typeof sugarbushInputSchema>>(res, 'body');
+      res.status(201).json(await service.create(currentUser(req).id, body));
+    },
+  );
 
   router.get('/sugarbushes/:id', member, async (_req, res) => {
     const access = accessOf(res);

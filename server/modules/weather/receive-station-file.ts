@@ -2,6 +2,7 @@ import type { RequestHandler } from 'express';
 import multer from 'multer';
 import type { Config } from '../../config';
 import { AppError } from '../../errors';
+import { readsMultipart } from '../../middleware/validate';
 import { sizeLabel } from '../basemaps/receive-upload';
 
 const chooseOne = 'Choose a station’s daily summaries CSV file to import';
@@ -17,7 +18,7 @@ export function receiveStationFile(config: Config): RequestHandler {
     defParamCharset: 'utf8',
   }).single('file');
 
-  return (req, res, next) => {
+  return readsMultipart((req, res, next) => {
     upload(req, res, (err: unknown) => {
       if (!err) {
         if (!req.file)
@@ -42,5 +43,5 @@ export function receiveStationFile(config: Config): RequestHandler {
         );
       next(err);
     });
-  };
+  });
 }

@@ -178,8 +178,8 @@ describe('the advice card', () => {
     expect(within(notice).getByText('This stand followed a repealed table.')).toBeInTheDocument();
   });
 
-  it('when the user steps to the next season, then that season is asked for and kept in the URL', async () => {
-    const next = upcomingSeason() + 1;
+  it('when the user steps to the season before, then that season is asked for and kept in the URL', async () => {
+    const before = upcomingSeason() - 1;
     const { api, router, user } = openAdvice('metric', {
       [ADVICE]: ((req) => ({
         status: 200,
@@ -187,12 +187,12 @@ describe('the advice card', () => {
       })) satisfies Handler,
     });
     await screen.findByRole('heading', { name: `Advice for ${upcomingSeason()}` });
-    await user.click(screen.getByRole('button', { name: 'Next season' }));
-    expect(await screen.findByRole('heading', { name: `Advice for ${next}` })).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Previous season' }));
+    expect(await screen.findByRole('heading', { name: `Advice for ${before}` })).toBeInTheDocument();
     await waitFor(() =>
-      expect(api.to(ADVICE).at(-1)!.url.searchParams.get('season')).toBe(String(next)),
+      expect(api.to(ADVICE).at(-1)!.url.searchParams.get('season')).toBe(String(before)),
     );
-    expect(new URLSearchParams(router.state.location.search).get('season')).toBe(String(next));
+    expect(new URLSearchParams(router.state.location.search).get('season')).toBe(String(before));
   });
 
   it('when a tree is resting, then it says so and gives no drilling', async () => {

@@ -82,8 +82,8 @@ describe('recording a measurement on the tree page', () => {
   });
 
   it.each([
-    ['0', 'Diameter must be more than 0'],
-    ['500', 'Diameter must be at most 400 cm'],
+    ['0', 'Diameter must be at least 2.5 cm'],
+    ['500', 'Diameter must be at most 250 cm'],
   ])(
     'when a forester enters a DBH of %s cm, then the field shows an error and nothing is sent',
     async (value, message) => {

@@ -168,17 +168,17 @@ describe('the season plan', () => {
   });
 
   it('when the URL names a season and filters, then they are sent and the tag links carry the season', async () => {
-    const { api } = openPlan({}, 'imperial', '/sugarbushes/3/plan?season=2030&q=04&sort=-share');
+    const { api } = openPlan({}, 'imperial', '/sugarbushes/3/plan?season=2025&q=04&sort=-share');
     await screen.findByRole('table', { name: 'Season plan' });
     expect(Object.fromEntries(lastPlanRequest(api))).toMatchObject({
-      season: '2030',
+      season: '2025',
       q: '04',
       sort: '-share',
     });
-    expect(screen.getByRole('heading', { name: 'Season plan 2030' })).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Season plan 2025' })).toBeInTheDocument();
     expect(screen.getByRole('link', { name: '0412' })).toHaveAttribute(
       'href',
-      '/trees/7?season=2030',
+      '/trees/7?season=2025',
     );
     expect(await screen.findByText('S 3 ft 7 in · N 2 ft 7 in')).toBeInTheDocument();
   });

@@ -104,7 +104,7 @@ describe('recording a taphole on the tree page', () => {
     await user.selectOptions(screen.getByLabelText('Side'), 'S');
     await user.click(save());
 
-    const message = 'Height must be between 0 and 400 cm above the ground';
+    const message = 'Height must be between 0 and 300 cm above the ground';
     expect(await screen.findByText(message)).toBeInTheDocument();
     expect(screen.getByLabelText('Height')).toHaveAttribute('aria-invalid', 'true');
     expect(screen.getByLabelText('Height')).toHaveAccessibleDescription(

@@ -15,7 +15,7 @@ const defaults: TapholeDefaults = {
   bitCm: 0.79375,
   collection: 'vacuum',
 };
-const form = (system: 'imperial' | 'metric' = 'metric') => emptyTapholeForm(system, '2027-03-02');
+const form = (system: 'imperial' | 'metric' = 'metric') => emptyTapholeForm(system, '2026-03-02');
 
 describe('turning the taphole form into a payload', () => {
   it('offers the three bits the trade sells, in cm to the fraction’s last digit', () => {
@@ -57,7 +57,7 @@ describe('turning the taphole form into a payload', () => {
     );
     expect(result).toEqual({
       ok: false,
-      errors: { depthCm: 'Depth must be more than 0 and at most 3.9 in' },
+      errors: { depthCm: 'Depth must be between 0.4 in and 3.1 in, bark included' },
     });
   });
 });

@@ -1,6 +1,7 @@
 import { normalizeAzimuth } from '@shared/rules/index';
 import type { Collection } from '@shared/schemas/enums';
-import { tapholeInputSchema, type TapholeInput } from '@shared/schemas/taphole';
+import { FIRST_SEASON, lastSeason } from '@shared/schemas/plan';
+import { TAPHOLE_LIMITS, tapholeInputSchema, type TapholeInput } from '@shared/schemas/taphole';
 import { formatBitSize } from '@/lib/advice-words';
 import { bitSizes, matchBit } from '@/lib/bit-sizes';
 import { nearestPoint, pointDeg, type CompassPoint } from '@/lib/compass';
@@ -109,16 +110,15 @@ export const readSeason = (values: TapholeFormValues, defaults: TapholeDefaults)
   return /^\s*\d{4}\s*$/.test(values.season) ? Number(values.season) : undefined;
 };
 
-const { shape } = tapholeInputSchema;
-const maxHeightCm = shape.heightCm.maxValue ?? 400;
-const maxDepthCm = shape.depthCm.maxValue ?? 10;
+const maxHeightCm = TAPHOLE_LIMITS.heightCm.max;
+const { min: minDepthCm, max: maxDepthCm } = TAPHOLE_LIMITS.depthCm;
 
 /** The schema's limits, in the tapper's units. */
 function rangeMessage(field: TapholeField, system: UnitSystem): string {
   const imperial = system === 'imperial';
   switch (field) {
     case 'season':
-      return `Season must be a year from ${shape.season.minValue} to ${shape.season.maxValue}`;
+      return `Season must be a year from ${FIRST_SEASON} to ${lastSeason()}`;
     case 'drilledOn':
       return 'Enter the date as YYYY-MM-DD';
     case 'heightCm': {
@@ -130,8 +130,10 @@ function rangeMessage(field: TapholeField, system: UnitSystem): string {
     case 'azimuthDeg':
       return 'Degrees run from 0 (north) to 359, clockwise';
     case 'depthCm': {
-      const max = imperial ? `${roundTo(cmToIn(maxDepthCm), 1)} in` : `${maxDepthCm} cm`;
-      return `Depth must be more than 0 and at most ${max}`;
+      const [min, max] = [minDepthCm, maxDepthCm].map((cm) =>
+        imperial ? `${roundTo(cmToIn(cm), 1)} in` : `${cm} cm`,
+      );
+      return `Depth must be between ${min} and ${max}, bark included`;
     }
     case 'bitCm':
       return 'Choose the bit you drilled with';

@@ -6,7 +6,7 @@ import {
 } from '@shared/schemas/enums';
 import { crownDiebackClasses } from '@shared/schemas/measurement';
 import { bothWays, oneOf, parseListParams, useListSearchParams } from '@/lib/list-search-params';
-import { FIRST_SEASON } from '@/lib/season';
+import { FIRST_SEASON, lastSeason } from '@/lib/season';
 import { TREE_PAGE_SIZE } from '../api/get-trees';
 import type { TreeListFilters, TreeSort } from '../api/tree-keys';
 
@@ -28,7 +28,9 @@ function diebackParams(
   const season = Number(params.get('diebackSeason') ?? NaN);
   return {
     dieback,
-    ...(Number.isInteger(season) && season >= FIRST_SEASON ? { diebackSeason: season } : {}),
+    ...(Number.isInteger(season) && season >= FIRST_SEASON && season <= lastSeason()
+      ? { diebackSeason: season }
+      : {}),
   };
 }
 
