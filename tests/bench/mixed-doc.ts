@@ -21,7 +21,7 @@ export function mixedVerdicts(f: MixedFigures, label: string): Verdict[] {
   return [
     under(
       `mixed load: errors among ${fmt(f.mixed.requests, 0)} answers (${f.users} users, ${f.seconds} s), ${label}`,
-      f.mixed.errors + f.floor.errors,
+      f.mixed.errors,
       MIXED_TARGETS.errors,
       (n) => fmt(n, 0),
     ),

@@ -3,7 +3,9 @@
  * own, each in a loop of one action then a think time, for exactly `MIXED_SECONDS` (no new request
  * after that; the at most one request per user still in flight is waited for and counted). Every
  * answer is counted by kind and status; the floor is the same users and loop on the trivial route,
- * measured just before.
+ * measured just before. A hand-written client rather than autocannon: autocannon sends each
+ * connection's next request the moment the last is answered (no think time) and times all
+ * requests as one.
  */
 import { performance } from 'node:perf_hooks';
 import seedrandom from 'seedrandom';
