@@ -8,6 +8,9 @@
  *   BENCH_WRITE_DOC=0          print only, leave docs/benchmarks.md as it is
  *   BENCH_ONLY=import          only the 10,000-row import (and the trivial route meanwhile) for
  *                              each stand, no build, no browser, printed only
+ *   BENCH_ONLY=load            only the mixed load run (50 signed-in users, reads and writes,
+ *                              beside the trivial route) for each stand, printed only
+ *   BENCH_MIXED_SECONDS=30     length of each of the mixed load's two runs
  */
 import fs from 'node:fs';
 import os from 'node:os';
@@ -19,6 +22,9 @@ import { launchBrowser } from '../e2e/harness';
 import { bundleFigures, ensureClientBuilt, type BundleFigures } from './bundle';
 import { importBench, IMPORT_ROWS } from './import-bench';
 import { importOnly } from './import-only';
+import { mixedOnly } from './mixed-only';
+import { mixedSummary } from './mixed-doc';
+import { mixedSection, prepareCrew } from './mixed-section';
 import { busyWindow, machineInfo, pct } from './machine';
 import { measureMap } from './map-draw';
 import { readStand, standSettings, timePlanStand } from './plan-floor';
@@ -42,11 +48,13 @@ const MAP = process.env.BENCH_MAP !== '0';
 const MAP_RUNS = Math.max(1, Number(process.env.BENCH_MAP_RUNS ?? 2) || 1);
 const OTHER_PROFILE = 'traditional';
 const ONLY = process.env.BENCH_ONLY ?? '';
-if (ONLY !== '' && ONLY !== 'import') {
-  console.error(`BENCH_ONLY must be "import" (or unset), not "${ONLY}"`);
+if (ONLY !== '' && ONLY !== 'import' && ONLY !== 'load') {
+  console.error(`BENCH_ONLY must be "import" or "load" (or unset), not "${ONLY}"`);
   process.exit(2);
 }
 const SAMPLE_TREES = 200;
+/** The whole run puts the mixed load on this stand only (`BENCH_ONLY=load` on each of BENCH_TREES). */
+const MIXED_STAND = 20_000;
 const MEASURED_TREES = 10;
 
 async function benchStand(trees: number, browser: Browser | null): Promise<StandResult> {
@@ -78,6 +86,7 @@ async function benchStand(trees: number, browser: Browser | null): Promise<Stand
   const sample = record.filter((_, i) => i % step === 0).slice(0, SAMPLE_TREES);
   const treeIds = sample.map((t) => Number(t.treeId));
 
+  const crew = trees === MIXED_STAND ? await prepareCrew(dbFile, cached.standId) : null;
   const server = await startBenchServer({ dbFile, logFile: path.join(dir, 'server.log') });
   try {
     console.log(`  server on ${server.url}, answering ${server.readyS.toFixed(1)} s after start`);
@@ -157,6 +166,21 @@ async function benchStand(trees: number, browser: Browser | null): Promise<Stand
       );
       return d;
     });
+    // Before the import, which adds 10,000 trees to the stand.
+    const mixed = !crew
+      ? undefined
+      : await attempt('the mixed load', async () => {
+          const f = await mixedSection({
+            baseUrl: server.url,
+            owner: s,
+            crew,
+            standFile: cached.file,
+            standId: cached.standId,
+            season: SEASON,
+          });
+          console.log(`  ${mixedSummary(f, 'mixed load')}`);
+          return f;
+        });
     const imports = await attempt(`a ${IMPORT_ROWS}-row CSV import`, async () => {
       const f = await importBench(s, cached.standId, {
         cached: cached.file,
@@ -190,6 +214,7 @@ async function benchStand(trees: number, browser: Browser | null): Promise<Stand
       measurements,
       guideline,
       during,
+      mixed,
       imports,
       errors,
     };
@@ -207,6 +232,10 @@ export const median = (xs: readonly number[]) => {
 async function main() {
   if (ONLY === 'import') {
     for (const trees of STANDS) await importOnly(trees, SEASONS);
+    return;
+  }
+  if (ONLY === 'load') {
+    for (const trees of STANDS) await mixedOnly(trees, SEASONS);
     return;
   }
   const started = performance.now();

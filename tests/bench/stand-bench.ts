@@ -61,7 +61,7 @@ export async function untilCurrent(s: Session, standId: number, season: number, 
  * Wait until the server is idle again: a run cut at its cap leaves requests in flight on the
  * server, which would otherwise land in the next run's figures.
  */
-async function settle(s: Session) {
+export async function settle(s: Session) {
   const until = performance.now() + SETTLE_CAP_MS;
   let quick = 0;
   while (quick < 3 && performance.now() < until) {

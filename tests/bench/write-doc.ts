@@ -16,6 +16,8 @@ import {
   type UnderRecompute,
 } from './stand-bench';
 import { IMPORT_ROWS, type ImportFigures } from './import-bench';
+import { mixedHeader, mixedPara, mixedRows, mixedVerdicts } from './mixed-doc';
+import type { MixedFigures } from './mixed-load';
 
 export interface StandResult {
   trees: number;
@@ -40,6 +42,8 @@ export interface StandResult {
   measurements: (MeasurementFigures & { busy: BusyWindow }) | null;
   guideline: (GuidelineFigures & { busy: BusyWindow }) | null;
   during: UnderRecompute | null;
+  /** The mixed load of the crew beside the trivial route (one stand only; null when it failed). */
+  mixed?: MixedFigures | null;
   /** A 10,000-row CSV import beside a bare insert, and the trivial route meanwhile. */
   imports?: ImportFigures | null;
   /** Sections that failed, with the reason; their figures are missing. */
@@ -127,6 +131,14 @@ export function writeDoc(run: RunFigures): string {
         ? under(during, largest.imports.trivial.p99, TARGETS.duringImportP99Ms)
         : failed(during),
     );
+  }
+  for (const s of run.stands) {
+    if (s.mixed) verdicts.push(...mixedVerdicts(s.mixed, s.label));
+    else if (s.mixed === null)
+      verdicts.push(
+        failed(`mixed load: errors, ${s.label}`),
+        failed(`mixed load: p99, ${s.label}`),
+      );
   }
   for (const s of run.stands) {
     if (!s.map) continue;
@@ -333,6 +345,18 @@ export function writeDoc(run: RunFigures): string {
       ];
     }),
   );
+
+  for (const s of run.stands.filter((x) => x.mixed)) {
+    r.heading(`Mixed load: ${s.mixed!.users} users for ${s.mixed!.seconds} s, ${s.label}`);
+    r.para(`${mixedPara(s.mixed!)}\n`);
+    r.table(mixedHeader, mixedRows(s.mixed!));
+    r.para(
+      `Others used ${others(s.mixed!.floor.busy)} of the cores during the floor run and ${others(s.mixed!.mixed.busy)} during the mixed run.` +
+        (s.mixed!.mixed.errorSamples.length
+          ? ` The first errors: ${s.mixed!.mixed.errorSamples.map((e) => `\`${e}\``).join('; ')}.`
+          : ''),
+    );
+  }
 
   r.heading('A CSV import of 10,000 trees');
   r.para(
