@@ -115,13 +115,14 @@ describe('editing the woods map', () => {
   });
 
   it('when an MBTiles upload is refused, then progress shows while sending and the server message after', async () => {
+    // After openMap: its API stand-in replaces XMLHttpRequest too, and this one must win.
+    const { user } = openMap();
     const sent = fakeUpload(400, {
       error: {
         code: 'not-raster',
         message: 'This MBTiles file holds vector tiles; upload raster tiles (png, jpg or webp).',
       },
     });
-    const { user } = openMap();
     await user.upload(
       await screen.findByLabelText('MBTiles file'),
       new File(['x'], 'ledge.mbtiles'),
@@ -148,10 +149,10 @@ describe('editing the woods map', () => {
       sizeBytes: 1,
       createdAt: '2026-01-01',
     };
-    fakeUpload(201, basemap);
     let listed = false;
     const list: Handler = () => ({ status: 200, body: page(listed ? [basemap] : []) });
     const { user } = openMap({ routes: { 'GET /api/sugarbushes/3/basemaps': list } });
+    fakeUpload(201, basemap);
     listed = true;
     await user.upload(
       await screen.findByLabelText('MBTiles file'),
