@@ -1,4 +1,5 @@
 import { env } from '@/config/env';
+import { serverReached, serverUnreachable } from './connectivity';
 
 /** An error answer from the API: `{ error: { code, message, fields? } }`, or a network failure (status 0). */
 export class ApiError extends Error {
@@ -135,6 +136,10 @@ async function toApiError(response: Response): Promise<ApiError> {
   );
 }
 
+/** The lightest read there is, to learn whether the server can be reached again. */
+const probeServer = () =>
+  fetch(`${env.apiBaseUrl}/auth/me`, { credentials: 'same-origin', cache: 'no-store' });
+
 async function request<T>(path: string, options: RequestOptions = {}, retried = false): Promise<T> {
   const method = options.method ?? 'GET';
   const headers: Record<string, string> = { ...options.headers, Accept: 'application/json' };
@@ -155,6 +160,7 @@ async function request<T>(path: string, options: RequestOptions = {}, retried = 
     });
   } catch (error) {
     if ((error as { name?: string }).name === 'AbortError') throw error;
+    serverUnreachable(probeServer);
     throw new ApiError(
       0,
       'network',
@@ -162,6 +168,7 @@ async function request<T>(path: string, options: RequestOptions = {}, retried = 
     );
   }
 
+  serverReached();
   if (!response.ok) {
     const error = await toApiError(response);
     if (method !== 'GET' && error.status === 403 && error.code === 'csrf-invalid' && !retried) {
