@@ -86,7 +86,12 @@ describe('the map answer as bytes', () => {
   });
 
   it('when no encoding is named, or only one the worker does not make, then the JSON comes as it is', async () => {
-    for (const headers of [{}, { 'accept-encoding': 'deflate' }, { 'accept-encoding': 'br' }]) {
+    const asked: Record<string, string>[] = [
+      {},
+      { 'accept-encoding': 'deflate' },
+      { 'accept-encoding': 'br' },
+    ];
+    for (const headers of asked) {
       const res = await raw(mapPath(), headers);
       expect(res.status).toBe(200);
       // Not compressed on the request thread by the middleware either.
