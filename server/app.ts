@@ -92,12 +92,16 @@ export function createApp(opts: AppOptions) {
         : false,
     }),
   );
-  // Large answers (a whole stand's map data) shrink several-fold; tiles are already compressed.
+  // Large answers shrink several-fold; tiles are already compressed, and an answer that set
+  // `res.locals.encoded` (the map's, gzipped in a worker or sent as it was asked) is left alone.
   app.use(
     compression({
       // Fast over small: JSON shrinks almost as well at level 1, at a third of the work.
       level: 1,
-      filter: (req, res) => !req.path.startsWith('/api/basemaps/') && compression.filter(req, res),
+      filter: (req, res) =>
+        !req.path.startsWith('/api/basemaps/') &&
+        !res.locals.encoded &&
+        compression.filter(req, res),
     }),
   );
   app.use(express.json({ limit: '1mb' }));

@@ -14,6 +14,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { adviceRepository } from '../../server/modules/advice/advice.repository';
 import { adviseAndStore } from '../../server/modules/advice/advise-and-store';
 import { inspectMbtiles } from '../../server/modules/basemaps/mbtiles';
+import { buildMapBytes } from '../../server/modules/map/map-task';
 import { TILE_LOOKUP_SQL } from '../../server/modules/basemaps/tile-store';
 import { solidPng, writeMbtiles } from './mbtiles-fixture';
 import {
@@ -301,6 +302,24 @@ describeOnSqlite('query plans of the hot reads', () => {
     const steps = await offIndexDuring(async () => {
       await adviceRepository(t.db).staleTreeIds(team.standId, season, 0);
       await adviseAndStore(t.db, team.standId, season, ids.slice(0, 5));
+    });
+    expect(steps).toEqual([]);
+  });
+
+  it("when the woods map's answer is built (in a worker, on its own connection), then its statements stay on their indexes", async () => {
+    const season = upcomingSeason();
+    const { advice_version } = await t
+      .db('sugarbushes')
+      .where({ id: team.standId })
+      .first('advice_version');
+    const steps = await offIndexDuring(async () => {
+      const built = await buildMapBytes(t.db, {
+        sugarbushId: team.standId,
+        season,
+        standVersion: Number(advice_version),
+        gzip: false,
+      });
+      expect(built.complete).toBe(true);
     });
     expect(steps).toEqual([]);
   });

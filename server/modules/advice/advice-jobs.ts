@@ -15,6 +15,7 @@ import type { AdviceTask, PreviewGuideline } from './advice-worker-tasks';
 import type { IssuedPlanTask } from '../issued-plans/issued-plan-tasks';
 import type { ImportOutcome, ImportTask } from '../imports/run-import';
 import type { ProgressStep } from '../imports/import-progress';
+import type { MapBuilt } from '../map/map-task';
 
 /** Trees a worker advises in one task: small enough that a write never waits long for the lock. */
 const CHUNK = 500;
@@ -34,6 +35,16 @@ export interface AdviceJobs {
   running(sugarbushId: number, season: number): { done: number; total: number } | null;
   /** Whole-stand reads of the stored rows, in a worker: the season's totals … */
   totals(sugarbushId: number, season: number, standVersion: number): Promise<PlanTotals>;
+  /**
+   * … the woods map's answer as bytes, serialised (and gzipped when asked) in the worker and
+   * handed over without a copy; `incomplete` where a tree has no current row …
+   */
+  mapBytes(
+    sugarbushId: number,
+    season: number,
+    standVersion: number,
+    gzip: boolean,
+  ): Promise<MapBuilt>;
   /** … and the ids of the rows a filter keeps, in a sort's order. */
   orderedIds(
     sugarbushId: number,
@@ -198,6 +209,10 @@ export function createAdviceJobs(opts: {
 
     totals(sugarbushId, season, standVersion) {
       return task<PlanTotals>({ kind: 'totals', sugarbushId, season, standVersion });
+    },
+
+    mapBytes(sugarbushId, season, standVersion, gzip) {
+      return task<MapBuilt>({ kind: 'map', sugarbushId, season, standVersion, gzip });
     },
 
     orderedIds(sugarbushId, season, standVersion, filter) {

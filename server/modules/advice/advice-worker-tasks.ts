@@ -17,6 +17,7 @@ import type { TrendResult } from '../trends/stand-trends';
 import { computeTrends } from '../trends/trends-task';
 import { runIssuedPlanTask, type IssuedPlanTask } from '../issued-plans/issued-plan-tasks';
 import { trendsRepository } from '../trends/trends.repository';
+import { buildMapBytes, movedMapBytes, type MapBuilt } from '../map/map-task';
 import { adviceRepository, type PlanFilter, type WalkStart } from './advice.repository';
 import { adviseAndStore } from './advise-and-store';
 import { profileOf, standGuideline } from './stand-guideline';
@@ -34,6 +35,8 @@ export type AdviceTask =
   | (OnStand & { kind: 'stale'; standVersion: number })
   /** Advise these trees and store the rows. */
   | (OnStand & { kind: 'advise'; treeIds: number[] })
+  /** The woods map's answer, serialised (and gzipped when `gzip`), its bytes handed over. */
+  | (OnStand & { kind: 'map'; standVersion: number; gzip: boolean })
   /** The season's totals over the stand's current rows. */
   | (OnStand & { kind: 'totals'; standVersion: number })
   /** The ids of the current rows matching a filter, in a sort's order. */
@@ -95,6 +98,7 @@ export async function runAdviceTask(
   | EvaluatedTree[]
   | TrendResult
   | ImportOutcome
+  | MapBuilt
   | Awaited<ReturnType<typeof runIssuedPlanTask>>
 > {
   const db = dbFor(task.database);
@@ -119,6 +123,7 @@ export async function runAdviceTask(
     return evaluateCompliance(db, task.sugarbushId, task.season, task.guidelines);
   if (task.kind === 'stale')
     return adviceRepository(db).staleTreeIds(task.sugarbushId, task.season, task.standVersion);
+  if (task.kind === 'map') return movedMapBytes(await buildMapBytes(db, task));
   if (task.kind === 'totals')
     return adviceRepository(db).totals(task.sugarbushId, task.season, task.standVersion);
   if (task.kind === 'order')

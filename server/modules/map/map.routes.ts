@@ -18,14 +18,22 @@ export function mapRoutes(ctx: AppContext) {
     async (req, res) => {
       const { season = upcomingSeason() } = parsed<MapQuery>(res, 'query');
       const { sugarbushId } = accessOf(res);
-      const { etag, adviceVersion } = await service.mapVersion(sugarbushId, season);
+      const version = await service.mapVersion(sugarbushId, season);
       // Revalidated on every use; unchanged, the answer is a bodiless 304.
-      res.set({ ETag: etag, 'Cache-Control': 'private, no-cache' });
+      res.set({ ETag: version.etag, 'Cache-Control': 'private, no-cache' });
+      res.vary('Accept-Encoding');
       if (req.fresh) {
         res.status(304).end();
         return;
       }
-      res.json(await service.map(sugarbushId, season, adviceVersion));
+      // Serialised and gzipped in a worker: the compression middleware leaves it as it is.
+      const gzip = req.acceptsEncodings('gzip', 'identity') === 'gzip';
+      const bytes = await service.mapBytes(sugarbushId, season, version, gzip);
+      const body = gzip && bytes.gzip ? bytes.gzip : bytes.json;
+      res.locals.encoded = true;
+      res.type('application/json');
+      if (body === bytes.gzip) res.set('Content-Encoding', 'gzip');
+      res.send(Buffer.from(body.buffer, body.byteOffset, body.byteLength));
     },
   );
 

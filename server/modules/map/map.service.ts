@@ -1,30 +1,14 @@
 import type { AppContext } from '../../context';
-import { isOutside } from '../../../shared/geo/inside';
 import { standFigures } from '../../../shared/geo/stand-figures';
-import {
-  MAP_COORD_DECIMALS,
-  mapCodes,
-  type MapColumns,
-  type StandFigures,
-} from '../../../shared/schemas/map';
+import type { StandFigures } from '../../../shared/schemas/map';
 import { upcomingSeason } from '../../../shared/schemas/plan';
 import { standGuideline } from '../advice/stand-guideline';
-import { mapRepository, type StandRow } from './map.repository';
+import { mapAnswers } from './map-answers';
+import type { MapBytes } from './map-task';
+import { mapRepository } from './map.repository';
 
 /** Bumped when the map answer changes shape, so no browser keeps an answer of the old shape. */
 const MAP_FORMAT = 1;
-
-const scale = 10 ** MAP_COORD_DECIMALS;
-const degrees = (v: number | null) => (v === null ? null : Math.round(v * scale) / scale);
-
-const indexOf = <T extends string>(codes: readonly T[]) => {
-  const at = new Map<string, number>(codes.map((c, i) => [c, i]));
-  return (code: string) => at.get(code) ?? -1;
-};
-const verdictIndex = indexOf(mapCodes.verdict);
-const statusIndex = indexOf(mapCodes.status);
-const speciesIndex = indexOf(mapCodes.species);
-const UNMEASURED = verdictIndex('unmeasured');
 
 export interface MapVersion {
   /** The guideline version whose stored rows are complete for the season. */
@@ -32,8 +16,13 @@ export interface MapVersion {
   etag: string;
 }
 
+/** Answers kept: a few stands or seasons open at once, each a minute at most. */
+const KEPT_ANSWERS = 4;
+const KEEP_MS = 60_000;
+
 export function mapService(ctx: AppContext) {
   const repo = mapRepository(ctx.db);
+  const answers = mapAnswers({ size: KEPT_ANSWERS, keepMs: KEEP_MS });
 
   /** A saved custom guideline that no longer passes is a 409 here too, as on the plan. */
   async function currentVersion(sugarbushId: number, season: number) {
@@ -70,45 +59,28 @@ export function mapService(ctx: AppContext) {
       };
     },
 
-    async map(
+    /**
+     * The map's answer at a version, as bytes ready to send (gzipped too when `gzip`): built,
+     * serialised and compressed in an advice worker, kept a short while by its tag, and shared
+     * by requests that ask for the same version while it is built.
+     */
+    mapBytes(
       sugarbushId: number,
-      season = upcomingSeason(),
-      adviceVersion?: number,
-    ): Promise<MapColumns> {
-      const [rows, boundary] = await Promise.all([
-        stand(sugarbushId, season, adviceVersion),
-        repo.boundary(sugarbushId),
-      ]);
-      const n = rows.length;
-      const out: MapColumns = {
-        season,
-        count: n,
-        codes: mapCodes,
-        ids: new Array<number>(n),
-        tags: new Array<string>(n),
-        lat: new Array<number | null>(n),
-        lng: new Array<number | null>(n),
-        verdict: new Array<number>(n),
-        taps: new Array<number>(n),
-        warnings: new Array<number>(n),
-        status: new Array<number>(n),
-        species: new Array<number>(n),
-        outside: new Array<0 | 1>(n),
-      };
-      rows.forEach((r: StandRow, i) => {
-        out.ids[i] = Number(r.id);
-        out.tags[i] = r.tag;
-        out.lat[i] = degrees(r.lat);
-        out.lng[i] = degrees(r.lng);
-        out.verdict[i] = r.verdict === null ? UNMEASURED : verdictIndex(r.verdict);
-        out.taps[i] = Number(r.taps ?? 0);
-        out.warnings[i] = Number(r.warning_mask ?? 0);
-        out.status[i] = statusIndex(r.status);
-        out.species[i] = speciesIndex(r.species);
-        // The stored position, not the rounded one, decides: as the stand figures do.
-        out.outside[i] = isOutside(boundary, r.lng, r.lat) ? 1 : 0;
+      season: number,
+      version: MapVersion,
+      gzip: boolean,
+    ): Promise<MapBytes> {
+      return answers.get(version.etag, gzip, async (withGzip) => {
+        const built = await ctx.advice.mapBytes(
+          sugarbushId,
+          season,
+          version.adviceVersion,
+          withGzip,
+        );
+        if (built.complete) return built;
+        const recheck = await ctx.advice.ensure(sugarbushId, season, { recheck: true });
+        return ctx.advice.mapBytes(sugarbushId, season, recheck, withGzip);
       });
-      return out;
     },
 
     async figures(sugarbushId: number, season = upcomingSeason()): Promise<StandFigures> {
