@@ -245,6 +245,12 @@ export const multipartBody: fc.Arbitrary<Send> = fc.oneof(
   }),
   bytes.map((b) => ({ raw: b, contentType: 'multipart/form-data' })),
   bytes.map((b) => ({ raw: b, contentType: 'multipart/form-data; boundary=nope' })),
+  // A well-formed form of a field or two and no file at all.
+  fc
+    .dictionary(fc.constantFrom('name', 'unit', 'dryRun', 'x'), fc.string({ maxLength: 12 }), {
+      maxKeys: 2,
+    })
+    .map((fields) => multipart(fields)),
   fc.constant(multipart({ mapping: 'x'.repeat(70_000) })),
   fc.constant(multipart(Object.fromEntries(Array.from({ length: 20 }, (_, i) => [`f${i}`, 'v'])))),
 );
