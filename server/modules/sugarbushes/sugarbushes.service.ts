@@ -63,7 +63,11 @@ export function sugarbushesService(ctx: AppContext) {
         (column) => column in row,
       );
       await ctx.db.transaction(async (trx) => {
-        if (Object.keys(row).length > 0) await sugarbushesRepository(trx).update(id, row);
+        const fields = Object.keys(row);
+        // The values a change replaces (a boundary, a guideline) stay in its audit entry.
+        const earlier: Record<string, unknown> =
+          fields.length > 0 ? ((await trx('sugarbushes').where({ id }).first(fields)) ?? {}) : {};
+        if (fields.length > 0) await sugarbushesRepository(trx).update(id, row);
         if (changesAdvice) await guidelineChanged(trx, id);
         else if ('boundary' in row) await boundaryChanged(trx, id);
         await auditRepository(trx).record({
@@ -72,7 +76,7 @@ export function sugarbushesService(ctx: AppContext) {
           action: 'update',
           entity: 'sugarbush',
           entityId: id,
-          detail: Object.keys(row),
+          detail: { fields, earlier },
         });
       });
       return this.get(userId, id);

@@ -80,14 +80,20 @@ export function treesService(ctx: AppContext) {
       const row = Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined));
       try {
         await ctx.db.transaction(async (trx) => {
-          if (Object.keys(row).length > 0) await treesRepository(trx).update(treeId, row);
+          const fields = Object.keys(row);
+          // What the change replaces stays in its audit entry: nothing about a tree is lost.
+          const earlier: Record<string, unknown> =
+            fields.length > 0
+              ? ((await trx('trees').where({ id: treeId }).first(fields)) ?? {})
+              : {};
+          if (fields.length > 0) await treesRepository(trx).update(treeId, row);
           await auditRepository(trx).record({
             sugarbushId,
             userId,
             action: 'update',
             entity: 'tree',
             entityId: treeId,
-            detail: row,
+            detail: { ...row, earlier },
           });
           await refreshTrees(trx, sugarbushId, [treeId]);
         });

@@ -32,4 +32,19 @@ describe('the audit trail in words', () => {
       auditWords(item('sap-entry', 'correct', { earlier: { sugarPct: 2 }, sugarPct: 2.4 }), 'cm'),
     ).toBe('Corrected a sap entry (sugarPct)');
   });
+
+  it('names a stand’s changed fields in either shape, and a tree’s without its earlier values', () => {
+    expect(auditWords(item('sugarbush', 'update', ['profile']), 'cm')).toBe(
+      'Changed the stand’s guideline',
+    );
+    expect(
+      auditWords(
+        item('sugarbush', 'update', { fields: ['name', 'boundary'], earlier: { name: 'Old' } }),
+        'cm',
+      ),
+    ).toBe('Changed the stand’s name and boundary');
+    expect(
+      auditWords(item('tree', 'update', { status: 'dead', earlier: { status: 'active' } }), 'cm'),
+    ).toBe('Set the status to Dead');
+  });
 });

@@ -68,7 +68,7 @@ export function auditWords(item: AuditItem, unit: LengthUnit): string {
     case 'tree:create':
       return 'Added the tree';
     case 'tree:update': {
-      const fields = Object.keys(d);
+      const fields = Object.keys(d).filter((k) => k !== 'earlier');
       if (typeof d.status === 'string' && fields.length === 1)
         return `Set the status to ${treeStatusLabels[d.status as TreeStatus] ?? d.status}`;
       return fields.length ? `Changed the tree’s ${fields.join(', ')}` : 'Edited the tree';
@@ -78,7 +78,10 @@ export function auditWords(item: AuditItem, unit: LengthUnit): string {
     case 'sugarbush:create':
       return 'Started the stand';
     case 'sugarbush:update': {
-      const fields = (Array.isArray(item.detail) ? item.detail : []) as string[];
+      // Entries name the changed columns: as a list, or as `fields` beside the earlier values.
+      const fields = (
+        Array.isArray(item.detail) ? item.detail : Array.isArray(d.fields) ? d.fields : []
+      ) as string[];
       const words = fields.map((f) => standFields[f] ?? f);
       return words.length ? `Changed the stand’s ${words.join(' and ')}` : 'Changed the stand';
     }
