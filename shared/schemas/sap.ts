@@ -18,7 +18,7 @@ export const sapEntryInputSchema = z
       .number({ error: 'Give the volume of sap' })
       .finite('Give the volume as a number')
       .positive('The volume must be more than 0')
-      .max(10_000_000, 'More than 10,000,000 L in a day is not a reading'),
+      .max(10_000_000, 'More than 10,000,000 L (2,640,000 gal) in a day is not a reading'),
     sugarPct: z
       .number({ error: 'Give the sugar content in °Brix' })
       .finite('Give the sugar content as a number')
@@ -27,8 +27,8 @@ export const sapEntryInputSchema = z
     heldAtC: z
       .number()
       .finite('Give the temperature as a number')
-      .min(-10, 'Sap held below −10 °C would be ice')
-      .max(40, 'Sap held above 40 °C is not a reading')
+      .min(-10, 'Sap held below −10 °C (14 °F) would be ice')
+      .max(40, 'Sap held above 40 °C (104 °F) is not a reading')
       .nullable()
       .optional(),
     collection: collectionSchema.nullable().optional(),
@@ -36,7 +36,7 @@ export const sapEntryInputSchema = z
       .number()
       .finite('Give the syrup as a number')
       .min(0, 'Syrup made cannot be negative')
-      .max(1_000_000, 'More than 1,000,000 L of syrup is not a reading')
+      .max(1_000_000, 'More than 1,000,000 L (264,000 gal) of syrup is not a reading')
       .nullable()
       .optional(),
     note: z.string().trim().max(2000, 'A note has at most 2,000 characters').nullable().optional(),

@@ -8,10 +8,16 @@ export const WEATHER_LIMITS_C = { min: -60, max: 45 } as const;
 
 const celsius = (what: string) =>
   z
-    .number({ error: `Give the ${what} in °C` })
+    .number({ error: `Give the ${what}` })
     .finite(`Give the ${what} as a number`)
-    .min(WEATHER_LIMITS_C.min, `A ${what} below ${WEATHER_LIMITS_C.min} °C is not a reading`)
-    .max(WEATHER_LIMITS_C.max, `A ${what} above ${WEATHER_LIMITS_C.max} °C is not a reading`);
+    .min(
+      WEATHER_LIMITS_C.min,
+      `A ${what} below ${WEATHER_LIMITS_C.min} °C (−76 °F) is not a reading`,
+    )
+    .max(
+      WEATHER_LIMITS_C.max,
+      `A ${what} above ${WEATHER_LIMITS_C.max} °C (113 °F) is not a reading`,
+    );
 
 /** A day of weather as recorded: dated no later than tomorrow (the stand's day may run ahead of UTC). */
 export const weatherDayInputSchema = z

@@ -37,7 +37,7 @@ describe('the sap form’s conversion', () => {
     );
     expect(byField).toEqual({
       volumeL: 'The volume must be more than 0',
-      heldAtC: 'Sap held above 40 °C is not a reading',
+      heldAtC: 'Sap held above 40 °C (104 °F) is not a reading',
     });
   });
 
