@@ -58,7 +58,7 @@ function RunMark({
           strokeWidth={1}
         />
       ) : (
-        <circle cx={cx} cy={cy} r={4.5} fill={colors.paper} stroke={colors.moss} strokeWidth={2} />
+        <circle cx={cx} cy={cy} r={4.5} fill={colors.moss} stroke={colors.ink} strokeWidth={1} />
       )}
     </g>
   );
