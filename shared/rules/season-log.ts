@@ -133,6 +133,13 @@ export interface SapSummary {
   expectedSyrupLRevised: number;
   /** Syrup made, where any entry gives it; null when none does. */
   syrupMadeL: number | null;
+  /** Entries that give the syrup made. */
+  entriesWithSyrup: number;
+  /**
+   * Syrup the Rule of 86 expects from the sap of those entries alone: what the syrup made
+   * compares with (null when none gives it).
+   */
+  expectedSyrupLWhereMade: number | null;
   /** Sap per tap, or null without taps. */
   yieldPerTapL: number | null;
 }
@@ -144,13 +151,19 @@ export function summarizeSap(entries: readonly SapDay[], taps: number): SapSumma
   let jones = 0;
   let revised = 0;
   let made: number | null = null;
+  let withSyrup = 0;
+  let expectedWhereMade = 0;
   for (const e of entries) {
     const syrup = expectedSyrup(e.volumeL, e.sugarPct);
     volumeL += e.volumeL;
     sugarVolume += e.volumeL * e.sugarPct;
     jones += syrup.jones86;
     revised += syrup.revised66;
-    if (e.syrupMadeL !== null && e.syrupMadeL !== undefined) made = (made ?? 0) + e.syrupMadeL;
+    if (e.syrupMadeL !== null && e.syrupMadeL !== undefined) {
+      made = (made ?? 0) + e.syrupMadeL;
+      withSyrup += 1;
+      expectedWhereMade += syrup.jones86;
+    }
   }
   return {
     volumeL,
@@ -158,6 +171,8 @@ export function summarizeSap(entries: readonly SapDay[], taps: number): SapSumma
     expectedSyrupL: jones,
     expectedSyrupLRevised: revised,
     syrupMadeL: made,
+    entriesWithSyrup: withSyrup,
+    expectedSyrupLWhereMade: withSyrup > 0 ? expectedWhereMade : null,
     yieldPerTapL: taps > 0 ? volumeL / taps : null,
   };
 }

@@ -91,6 +91,9 @@ export interface SapSeasonTotals {
   expectedSyrupL: number;
   expectedSyrupLRevised: number;
   syrupMadeL: number | null;
+  /** Entries that give the syrup made, and what the Rule of 86 expects of their sap alone. */
+  entriesWithSyrup: number;
+  expectedSyrupLWhereMade: number | null;
   taps: number;
   yieldPerTapL: number | null;
   days: number;

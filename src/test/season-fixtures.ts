@@ -85,6 +85,8 @@ export const sapTotals = (overrides: Partial<SapSeasonTotals> = {}): SapSeasonTo
   expectedSyrupL: 25,
   expectedSyrupLRevised: 24.78,
   syrupMadeL: null,
+  entriesWithSyrup: 0,
+  expectedSyrupLWhereMade: null,
   taps: 400,
   yieldPerTapL: 2.15,
   days: 1,

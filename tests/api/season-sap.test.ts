@@ -142,7 +142,9 @@ describe('recording sap', () => {
       '2025-03-15',
     ]);
     const totals = res.body.totals;
-    expect(totals).toMatchObject({ taps: 6, days: 2, syrupMadeL: 0.6 });
+    expect(totals).toMatchObject({ taps: 6, days: 2, syrupMadeL: 0.6, entriesWithSyrup: 1 });
+    // The one entry with syrup made: 8.6 L at 2.5 % → 8.6 / (86 / 2.5) = 0.25 L expected.
+    expect(totals.expectedSyrupLWhereMade).toBeCloseTo(0.25, 9);
     expect(totals.volumeL).toBeCloseTo(25.8, 9);
     expect(totals.expectedSyrupL).toBeCloseTo(0.8, 9);
     expect(totals.expectedSyrupLRevised).toBeCloseTo(0.797871, 5);
@@ -181,6 +183,8 @@ describe('recording sap', () => {
       expectedSyrupL: 0,
       expectedSyrupLRevised: 0,
       syrupMadeL: null,
+      entriesWithSyrup: 0,
+      expectedSyrupLWhereMade: null,
       taps: 1,
       yieldPerTapL: 0,
       days: 0,

@@ -78,6 +78,9 @@ describe('syrup expected from the sap', () => {
     expect(totals.volumeL).toBe(717);
     expect(totals.expectedSyrupL).toBeCloseTo(10 + 287 / (86 / 3), 6);
     expect(totals.syrupMadeL).toBe(9.5);
+    // Syrup made compares with what its own sap should make: 287 L at 3 % → 10.01 L.
+    expect(totals.entriesWithSyrup).toBe(1);
+    expect(totals.expectedSyrupLWhereMade).toBeCloseTo(287 / (86 / 3), 6);
     expect(totals.yieldPerTapL).toBeCloseTo(7.17, 6);
     expect(totals.meanSugarPct).toBeCloseTo((430 * 2 + 287 * 3) / 717, 6);
     expect(summarizeSap([], 0)).toMatchObject({

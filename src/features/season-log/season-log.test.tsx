@@ -280,13 +280,23 @@ describe('the season’s figures and states', () => {
       unitSystem: 'imperial',
       routes: {
         [SAP]: sapList([sapEntry()], {
-          totals: sapTotals({ volumeL: 3785.411784, syrupMadeL: 75.70823568, days: 12 }),
+          totals: sapTotals({
+            volumeL: 3785.411784,
+            syrupMadeL: 75.70823568,
+            entriesWithSyrup: 3,
+            expectedSyrupLWhereMade: 83.27905925,
+            days: 12,
+          }),
         }),
       },
     });
     const list = await screen.findByLabelText('Season 2026 totals');
     expect(within(list).getByText('Sap collected').nextSibling).toHaveTextContent('1,000 gal');
     expect(within(list).getByText('Syrup made').nextSibling).toHaveTextContent('20.0 gal');
+    // Made on three entries only: beside what their sap alone should make (22 gal).
+    expect(within(list).getByText('Syrup made').parentElement).toHaveTextContent(
+      'from the sap of 3 entries, which should make 22.0 gal by the Rule of 86',
+    );
     expect(within(list).getByText('Taps').nextSibling).toHaveTextContent('400');
     expect(screen.getByRole('complementary', { name: 'Boiling safely' })).toHaveTextContent(
       /local codes, your inspector and licensed professionals come first/,

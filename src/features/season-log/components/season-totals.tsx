@@ -39,7 +39,11 @@ export function SeasonTotals({
     {
       label: 'Syrup made',
       value: formatVolume(totals.syrupMadeL, units.volume),
-      note: totals.syrupMadeL === null ? 'not entered' : undefined,
+      // Made on some days only: compared with what that sap alone should make.
+      note:
+        totals.syrupMadeL === null || totals.expectedSyrupLWhereMade === null
+          ? 'not entered'
+          : `from the sap of ${totals.entriesWithSyrup === 1 ? '1 entry' : `${totals.entriesWithSyrup} entries`}, which should make ${formatVolume(totals.expectedSyrupLWhereMade, units.volume)} by the Rule of 86`,
     },
   ];
   return (
