@@ -59,6 +59,8 @@ export const weatherQuerySchema = z.object({ season: seasonSchema.optional() });
 export interface WeatherSeason {
   season: number;
   items: WeatherDay[];
+  /** The same days as `items`, under the name the season's days go by. */
+  days: WeatherDay[];
   total: number;
   /** The forecast's coming days (empty for a past season), classified the same way. */
   forecast: WeatherDay[];

@@ -15,31 +15,34 @@ export const weatherDay = (overrides: Partial<WeatherDay> = {}): WeatherDay => (
   ...overrides,
 });
 
-export const weatherSeason = (overrides: Partial<WeatherSeason> = {}): WeatherSeason => ({
-  season: 2026,
-  items: [
-    weatherDay({
-      date: '2026-03-09',
-      minC: 2,
-      maxC: 9,
-      run: 'none',
-      reason: '2 °C night, 9 °C day: no run, the night does not freeze',
-    }),
-    weatherDay({ date: '2026-03-10' }),
-    weatherDay({
-      date: '2026-03-11',
-      minC: -2,
-      maxC: 3,
-      run: 'run',
-      reason: '−2 °C night, 3 °C day: a run',
-    }),
-  ],
-  total: 3,
-  forecast: [],
-  forecastSource: null,
-  forecastError: null,
-  ...overrides,
-});
+export const weatherSeason = (overrides: Partial<WeatherSeason> = {}): WeatherSeason => {
+  const season: Omit<WeatherSeason, 'days'> = {
+    season: 2026,
+    items: [
+      weatherDay({
+        date: '2026-03-09',
+        minC: 2,
+        maxC: 9,
+        run: 'none',
+        reason: '2 °C night, 9 °C day: no run, the night does not freeze',
+      }),
+      weatherDay({ date: '2026-03-10' }),
+      weatherDay({
+        date: '2026-03-11',
+        minC: -2,
+        maxC: 3,
+        run: 'run',
+        reason: '−2 °C night, 3 °C day: a run',
+      }),
+    ],
+    total: 3,
+    forecast: [],
+    forecastSource: null,
+    forecastError: null,
+    ...overrides,
+  };
+  return { ...season, days: season.items };
+};
 
 export const sapEntry = (overrides: Partial<SapEntry> = {}): SapEntry => ({
   id: 41,

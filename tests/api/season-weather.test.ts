@@ -53,6 +53,8 @@ function importFile(
 const weatherOf = async (standId: number, season: number) => {
   const res = await owner.agent.get(`/api/sugarbushes/${standId}/weather?season=${season}`);
   expect(res.status, JSON.stringify(res.body)).toBe(200);
+  // The season's days, under both names a reader may look for.
+  expect(res.body.days).toEqual(res.body.items);
   return res.body;
 };
 

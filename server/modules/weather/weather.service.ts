@@ -109,7 +109,7 @@ export function weatherService(ctx: AppContext) {
         season >= new Date().getUTCFullYear()
           ? await forecast(sugarbushId)
           : { forecast: [], forecastSource: null, forecastError: null };
-      return { season, items, total: items.length, ...coming };
+      return { season, items, days: items, total: items.length, ...coming };
     },
 
     async record(sugarbushId: number, userId: number, input: WeatherDayInput): Promise<WeatherDay> {
