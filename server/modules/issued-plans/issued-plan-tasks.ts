@@ -91,13 +91,15 @@ async function issue(
           .first('profile', 'custom_profile', 'advice_version');
         if (Number(stand.advice_version) !== task.standVersion) return { stale: true as const };
         const profile = profileOf(stand.profile, stand.custom_profile);
-        const [rows, count, hazards] = await Promise.all([
-          currentAdvice(trx, task.sugarbushId, task.season, task.standVersion)
-            .orderBy('t.tag')
-            .select<{ id: number; tag: string; payload: string }[]>('t.id', 't.tag', 'a.payload'),
-          trx('trees').where({ sugarbush_id: task.sugarbushId }).count({ n: '*' }).first(),
-          standHazards(trx, task.sugarbushId),
-        ]);
+        // One after another: a transaction is one connection, which takes one query at a time.
+        const rows = await currentAdvice(trx, task.sugarbushId, task.season, task.standVersion)
+          .orderBy('t.tag')
+          .select<{ id: number; tag: string; payload: string }[]>('t.id', 't.tag', 'a.payload');
+        const count = await trx('trees')
+          .where({ sugarbush_id: task.sugarbushId })
+          .count({ n: '*' })
+          .first();
+        const hazards = await standHazards(trx, task.sugarbushId);
         // A tree changed or was added after the rows were made current.
         if (rows.length !== Number(count?.n ?? 0)) return { stale: true as const };
         const trees: (IssuedTreeRow & { codes: Set<string> })[] = rows.map((r) => {
