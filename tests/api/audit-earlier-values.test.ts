@@ -58,4 +58,22 @@ describe('what a change replaces stays in the audit trail', () => {
     expect([...detail.fields].sort()).toEqual(['boundary', 'name']);
     expect(detail.earlier).toEqual({ name: before.name, boundary: before.boundary });
   });
+
+  it('when a note’s follow-up moves and it is resolved, then each entry keeps what it replaced', async () => {
+    const consultant = await signIn(t.app, team.users.consultant);
+    const note = await consultant.agent
+      .post(`/api/trees/${team.treeId}/notes`)
+      .set('x-csrf-token', consultant.csrf)
+      .send({ category: 'follow-up', body: 'Look at the crown again', followUpOn: '2027-05-01' });
+    expect(note.status, note.text).toBe(201);
+    const moved = await consultant.agent
+      .patch(`/api/notes/${note.body.id}`)
+      .set('x-csrf-token', consultant.csrf)
+      .send({ followUpOn: '2027-06-15' });
+    expect(moved.status, moved.text).toBe(200);
+    expect(await lastEntry('note', note.body.id)).toMatchObject({
+      followUpOn: '2027-06-15',
+      earlier: { followUpOn: '2027-05-01', resolvedAt: null },
+    });
+  });
 });

@@ -70,7 +70,15 @@ export function notesService(ctx: AppContext) {
             action,
             entity: 'note',
             entityId: noteId,
-            detail: change,
+            // What the change replaces stays in the entry: who resolved it and when, the old date.
+            detail: {
+              ...change,
+              earlier: {
+                resolvedAt: current.resolved_at ?? null,
+                resolvedBy: current.resolved_by ?? null,
+                followUpOn: current.follow_up_on ?? null,
+              },
+            },
           });
         });
       }
