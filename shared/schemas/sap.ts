@@ -40,12 +40,15 @@ export const sapEntryInputSchema = z
       .nullable()
       .optional(),
     note: z.string().trim().max(2000, 'A note has at most 2,000 characters').nullable().optional(),
+    /** The id the recording device gave the entry: a resend with it stores the entry once. */
+    clientId: z.string().uuid('A client id is a UUID').optional(),
   })
   .strict();
 export type SapEntryInput = z.infer<typeof sapEntryInputSchema>;
 
 /** `PATCH /api/sap/:entryId`: a correction of any of the entry's fields; the earlier values stay in the audit trail. */
 export const sapCorrectionSchema = sapEntryInputSchema
+  .omit({ clientId: true })
   .partial()
   .refine((v) => Object.values(v).some((x) => x !== undefined), {
     message: 'Give at least one field to correct',
@@ -82,6 +85,8 @@ export interface SapEntry {
   yieldPerTapL: number | null;
   recordedById: number | null;
   recordedByName: string | null;
+  /** The id the recording device gave the entry; null for entries sent without one. */
+  clientId: string | null;
   createdAt: string;
 }
 

@@ -30,6 +30,8 @@ export const weatherDayInputSchema = z
       ),
     minC: celsius('night low'),
     maxC: celsius('day high'),
+    /** The id the recording device gave the entry: a resend with it is answered, not written again. */
+    clientId: z.string().uuid('A client id is a UUID').optional(),
   })
   .strict()
   .refine((v) => v.minC <= v.maxC, {

@@ -62,6 +62,7 @@ export const sapEntry = (overrides: Partial<SapEntry> = {}): SapEntry => ({
   yieldPerTapL: 2.15,
   recordedById: 12,
   recordedByName: 'Pat tapper',
+  clientId: null,
   createdAt: '2026-03-10T18:00:00.000Z',
   ...overrides,
 });

@@ -135,6 +135,46 @@ describe('the season log, in a real browser', () => {
     }
   });
 
+  it('without a network the tapper’s sap waits on the device, counted as waiting, and reaches the server once when the network is back', async () => {
+    const { context, page, sugarbushId } = await signedInForChecks(
+      env.browser,
+      env.server.url,
+      'tapper@fernside.example',
+      { width: 1280, height: 900 },
+    );
+    await page.goto(`${env.server.url}/sugarbushes/${sugarbushId}/season?season=2026`);
+    const sap = page.getByRole('region', { name: "Record a day's sap" });
+    await sap.waitFor();
+    await page.getByRole('group', { name: 'Units' }).getByRole('button', { name: '°C, L' }).click();
+    const storedOn = (day: string) =>
+      env.server.db('sap_entries').where({ sugarbush_id: sugarbushId, collected_on: day });
+    expect(await storedOn('2026-03-19')).toHaveLength(0);
+
+    await context.setOffline(true);
+    await sap.getByLabel('Date').fill('2026-03-19');
+    await sap.getByLabel('Sap volume (L)').fill('310');
+    await sap.getByLabel('Sugar (°Brix)').fill('2.2');
+    await sap.getByRole('button', { name: 'Save sap' }).click();
+    await sap.getByText(/the sap of Mar 19, 2026 waits to send/).waitFor();
+    await page.getByText('1 waiting to send').waitFor();
+    expect(await storedOn('2026-03-19')).toHaveLength(0);
+
+    await context.setOffline(false);
+    await expect
+      .poll(async () => (await storedOn('2026-03-19')).length, { timeout: 20000 })
+      .toBe(1);
+    await expect.poll(() => page.getByText(/waiting to send/).count(), { timeout: 15000 }).toBe(0);
+    const [row] = await storedOn('2026-03-19');
+    expect(row.client_id).toMatch(/^[0-9a-f-]{36}$/);
+    expect(row.volume_l).toBeCloseTo(310, 6);
+    // Sent once: one entry of the day, one audit entry for it.
+    const audits = await env.server
+      .db('audit_events')
+      .where({ sugarbush_id: sugarbushId, entity: 'sap-entry', entity_id: row.id });
+    expect(audits).toHaveLength(1);
+    await context.close();
+  });
+
   it('a consultant reads the log with no form to record', async () => {
     const { context, page, sugarbushId } = await signedInForChecks(
       env.browser,

@@ -18,6 +18,8 @@ export interface StoredSap {
   note: string | null;
   recordedById: number | null;
   recordedByName: string | null;
+  /** The id the recording device gave the entry, when it sent one. */
+  clientId: string | null;
   createdAt: string;
 }
 
@@ -36,6 +38,7 @@ const toStored = (r: Record<string, unknown>): StoredSap => ({
   note: (r.note as string | null) ?? null,
   recordedById: num(r.recorded_by),
   recordedByName: (r.recorded_by_name as string | null) ?? null,
+  clientId: (r.client_id as string | null) ?? null,
   createdAt: instant(r.created_at),
 });
 
@@ -107,6 +110,11 @@ export function sapRepository(db: Knex) {
       return row ? toStored(row) : undefined;
     },
 
+    async findByClientId(clientId: string): Promise<StoredSap | undefined> {
+      const row = await withNames(db('sap_entries as s').where('s.client_id', clientId)).first();
+      return row ? toStored(row) : undefined;
+    },
+
     async create(sugarbushId: number, userId: number, input: SapEntryInput): Promise<number> {
       const now = new Date().toISOString();
       const [row] = await db('sap_entries')
@@ -118,6 +126,7 @@ export function sapRepository(db: Knex) {
           note: null,
           ...columns(input),
           recorded_by: userId,
+          client_id: input.clientId ?? null,
           created_at: now,
           updated_at: now,
         })

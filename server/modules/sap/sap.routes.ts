@@ -38,9 +38,9 @@ export function sapRoutes(ctx: AppContext) {
     validate({ body: sapEntryInputSchema }),
     async (_req, res) => {
       const { sugarbushId, userId } = accessOf(res);
-      res
-        .status(201)
-        .json(await service.record(sugarbushId, userId, parsed<SapEntryInput>(res, 'body')));
+      const input = parsed<SapEntryInput>(res, 'body');
+      const { entry, created } = await service.record(sugarbushId, userId, input);
+      res.status(created ? 201 : 200).json(entry);
     },
   );
 

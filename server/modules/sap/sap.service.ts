@@ -11,6 +11,7 @@ import type {
   SapListQuery,
 } from '../../../shared/schemas/sap';
 import { auditRepository } from '../audit/audit.repository';
+import { storeOnce } from '../field-entries/store-once';
 import { logSeason } from '../weather/weather.service';
 import { sapRepository, type StoredSap } from './sap.repository';
 
@@ -36,6 +37,19 @@ const fields = [
   'syrupMadeL',
   'note',
 ] as const;
+
+/** The entry's fields as they are stored: what was left out is null, an empty note none. */
+const sapFields = (
+  v: Omit<SapEntryInput, 'clientId'>,
+): Pick<StoredSap, (typeof fields)[number]> => ({
+  collectedOn: v.collectedOn,
+  volumeL: v.volumeL,
+  sugarPct: v.sugarPct,
+  heldAtC: v.heldAtC ?? null,
+  collection: v.collection ?? null,
+  syrupMadeL: v.syrupMadeL ?? null,
+  note: v.note ? v.note : null,
+});
 
 export function sapService(ctx: AppContext) {
   const repo = sapRepository(ctx.db);
@@ -74,20 +88,38 @@ export function sapService(ctx: AppContext) {
       };
     },
 
-    async record(sugarbushId: number, userId: number, input: SapEntryInput): Promise<SapEntry> {
-      const id = await ctx.db.transaction(async (trx) => {
-        const newId = await sapRepository(trx).create(sugarbushId, userId, input);
-        await auditRepository(trx).record({
-          sugarbushId,
-          userId,
-          action: 'create',
-          entity: 'sap-entry',
-          entityId: newId,
-          detail: input,
-        });
-        return newId;
+    /**
+     * Records a day's sap with its audit entry. A resend with the same `clientId` answers with the
+     * stored entry (`created: false`) and writes nothing; the same id with other content is a 409.
+     */
+    async record(
+      sugarbushId: number,
+      userId: number,
+      input: SapEntryInput,
+    ): Promise<{ entry: SapEntry; created: boolean }> {
+      const { clientId, ...detail } = input;
+      const sent = sapFields(detail);
+      const { entry, created } = await storeOnce({
+        clientId,
+        find: (id) => repo.findByClientId(id),
+        matches: (stored) =>
+          stored.sugarbushId === sugarbushId && fields.every((f) => stored[f] === sent[f]),
+        check: async () => {},
+        create: () =>
+          ctx.db.transaction(async (trx) => {
+            const newId = await sapRepository(trx).create(sugarbushId, userId, input);
+            await auditRepository(trx).record({
+              sugarbushId,
+              userId,
+              action: 'create',
+              entity: 'sap-entry',
+              entityId: newId,
+              detail,
+            });
+            return (await sapRepository(trx).find(newId))!;
+          }),
       });
-      return answer(id);
+      return { entry: await answer(entry.id), created };
     },
 
     /** Changes the fields given; the values they replace are kept in the audit trail. */

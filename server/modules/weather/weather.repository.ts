@@ -24,8 +24,42 @@ const DATES_PER_QUERY = 500;
 /** Rows per INSERT: 9 values each, well under SQLite's bound-variable limit. */
 const ROWS_PER_INSERT = 100;
 
+/** What a device sent under its client id: the day's reading as it was given. */
+export interface WeatherSend {
+  clientId: string;
+  sugarbushId: number;
+  date: string;
+  minC: number;
+  maxC: number;
+}
+
 export function weatherRepository(db: Knex) {
   return {
+    /** The reading sent under this client id, if one was stored. */
+    async sent(clientId: string): Promise<WeatherSend | undefined> {
+      const r = await db('weather_day_sends').where({ client_id: clientId }).first();
+      return r
+        ? {
+            clientId: String(r.client_id),
+            sugarbushId: Number(r.sugarbush_id),
+            date: String(r.date),
+            minC: Number(r.min_c),
+            maxC: Number(r.max_c),
+          }
+        : undefined;
+    },
+
+    /** Keeps the client id of a sent reading (its unique key refuses a second one). */
+    async keepSend(send: WeatherSend): Promise<void> {
+      await db('weather_day_sends').insert({
+        client_id: send.clientId,
+        sugarbush_id: send.sugarbushId,
+        date: send.date,
+        min_c: send.minC,
+        max_c: send.maxC,
+      });
+    },
+
     /** The season's days (its calendar year), oldest first. */
     async season(sugarbushId: number, season: number): Promise<StoredDay[]> {
       const rows = await db('weather_days')

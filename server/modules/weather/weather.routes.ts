@@ -36,9 +36,9 @@ export function weatherRoutes(ctx: AppContext) {
     validate({ body: weatherDayInputSchema }),
     async (_req, res) => {
       const { sugarbushId, userId } = accessOf(res);
-      res
-        .status(201)
-        .json(await service.record(sugarbushId, userId, parsed<WeatherDayInput>(res, 'body')));
+      const input = parsed<WeatherDayInput>(res, 'body');
+      const { entry, created } = await service.record(sugarbushId, userId, input);
+      res.status(created ? 201 : 200).json(entry);
     },
   );
 

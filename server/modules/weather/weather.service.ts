@@ -9,10 +9,16 @@ import type {
   WeatherSeason,
 } from '../../../shared/schemas/weather';
 import { auditRepository } from '../audit/audit.repository';
+import { storeOnce } from '../field-entries/store-once';
 import { ForecastUnavailable } from './forecast/http-forecast';
 import { standPosition } from './stand-position';
 import { readStationFile } from './station-csv';
-import { latestLogSeason, weatherRepository, type StoredDay } from './weather.repository';
+import {
+  latestLogSeason,
+  weatherRepository,
+  type StoredDay,
+  type WeatherSend,
+} from './weather.repository';
 
 /** The coming days the season log shows. */
 export const FORECAST_DAYS = 7;
@@ -73,9 +79,12 @@ export function weatherService(ctx: AppContext) {
     userId: number,
     days: StoredDay[],
     action: 'record' | 'import',
+    send?: WeatherSend,
   ) {
     return ctx.db.transaction(async (trx) => {
       const stored = weatherRepository(trx);
+      // First, so a send racing its own resend stops here before writing anything.
+      if (send) await stored.keepSend(send);
       const audit = auditRepository(trx);
       const before = await stored.onDates(
         sugarbushId,
@@ -112,10 +121,36 @@ export function weatherService(ctx: AppContext) {
       return { season, items, days: items, total: items.length, ...coming };
     },
 
-    async record(sugarbushId: number, userId: number, input: WeatherDayInput): Promise<WeatherDay> {
-      const day: StoredDay = { ...input, source: 'manual', station: null };
-      await write(sugarbushId, userId, [day], 'record');
-      return weatherDay(day);
+    /**
+     * Records a day's reading (replacing the date's earlier one). A resend with the same
+     * `clientId` writes nothing and answers the day as it now stands (`created: false`), so a
+     * late resend never undoes a reading given after it; the same id with another reading is a 409.
+     */
+    async record(
+      sugarbushId: number,
+      userId: number,
+      input: WeatherDayInput,
+    ): Promise<{ entry: WeatherDay; created: boolean }> {
+      const { clientId, ...reading } = input;
+      const day: StoredDay = { ...reading, source: 'manual', station: null };
+      const send = clientId ? { clientId, sugarbushId, ...reading } : undefined;
+      const { created } = await storeOnce<WeatherSend | undefined>({
+        clientId,
+        find: (id) => repo.sent(id),
+        matches: (s) =>
+          s!.sugarbushId === sugarbushId &&
+          s!.date === day.date &&
+          s!.minC === day.minC &&
+          s!.maxC === day.maxC,
+        check: async () => {},
+        create: async () => {
+          await write(sugarbushId, userId, [day], 'record', send);
+          return send;
+        },
+      });
+      if (created) return { entry: weatherDay(day), created };
+      const now = (await repo.onDates(sugarbushId, [day.date])).get(day.date) ?? day;
+      return { entry: weatherDay(now), created };
     },
 
     async importFile(

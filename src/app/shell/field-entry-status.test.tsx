@@ -1,4 +1,5 @@
-import { act, screen, waitFor } from '@testing-library/react';
+import { onlineManager } from '@tanstack/react-query';
+import { act, screen, waitFor, within } from '@testing-library/react';
 import { registerFieldEntryDefaults, refusedEntries, type FieldEntry } from '@/lib/field-entries';
 import { json, mockApi } from '@/test/api-mock';
 import { meAs } from '@/test/fixtures';
@@ -76,5 +77,68 @@ describe('entries the server refused', () => {
     expect(body.confirmedOutlier).toBe(true);
     expect(body.clientId).not.toBe(entry.clientId);
     expect(refusedEntries.list()).toEqual([]);
+  });
+});
+
+const sap: FieldEntry = {
+  kind: 'sap',
+  clientId: '5d2c1b7e-8f3a-4b6c-9e1d-2a3b4c5d6e7f',
+  sugarbushId: 3,
+  input: { collectedOn: '2026-03-14', volumeL: 860, sugarPct: 2.5 },
+};
+const weather: FieldEntry = {
+  kind: 'weather',
+  clientId: '7a8b9c0d-1e2f-4a3b-8c4d-5e6f7a8b9c0d',
+  sugarbushId: 3,
+  input: { date: '2026-03-14', minC: -4, maxC: 5 },
+};
+
+describe('a stand’s sap and weather in the queue', () => {
+  afterEach(() => act(() => onlineManager.setOnline(true)));
+
+  it('when a day’s sap waits offline, then the shell counts it as waiting to send', async () => {
+    mockApi({ 'GET /api/auth/me': meAs('tapper') });
+    const { queryClient } = renderPage({ path: '/', url: '/', element: <FieldEntryStatus /> });
+    registerFieldEntryDefaults(queryClient);
+    act(() => onlineManager.setOnline(false));
+    act(() => {
+      void queryClient
+        .getMutationCache()
+        .build(queryClient, { mutationKey: ['field-entry'] })
+        .execute(sap)
+        .catch(() => undefined);
+    });
+    expect(await screen.findByText('1 waiting to send')).toBeInTheDocument();
+  });
+
+  it('when sap and weather were refused, then the list names them by day, and one sent again goes to its stand with a new id', async () => {
+    const api = mockApi({
+      'GET /api/auth/me': meAs('tapper'),
+      'POST /api/sugarbushes/3/sap': json(201, { id: 9 }),
+    });
+    for (const entry of [sap, weather])
+      refusedEntries.add({
+        entry,
+        code: 'forbidden',
+        message: 'Your role in this sugarbush does not record the season log',
+        refusedAt: '2026-03-14T12:00:00Z',
+      });
+    const { queryClient, user } = renderPage({
+      path: '/',
+      url: '/',
+      element: <FieldEntryStatus />,
+    });
+    registerFieldEntryDefaults(queryClient);
+    await user.click(await screen.findByRole('button', { name: 'Review' }));
+    const items = screen.getAllByRole('listitem');
+    expect(items[0]).toHaveTextContent('Sap of Mar 14, 2026');
+    expect(items[1]).toHaveTextContent('Weather of Mar 14, 2026');
+    expect(items[0]).not.toHaveTextContent('Tree');
+    await user.click(within(items[0]).getByRole('button', { name: 'Send again' }));
+    await waitFor(() => expect(api.to('POST /api/sugarbushes/3/sap')).toHaveLength(1));
+    const body = api.to('POST /api/sugarbushes/3/sap')[0].body as Record<string, unknown>;
+    expect(body).toMatchObject({ collectedOn: '2026-03-14', volumeL: 860, sugarPct: 2.5 });
+    expect(body.clientId).not.toBe(sap.clientId);
+    expect(refusedEntries.list().map((r) => r.entry.kind)).toEqual(['weather']);
   });
 });

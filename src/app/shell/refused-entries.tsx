@@ -10,10 +10,18 @@ import {
 import { formatDate, formatDbh, useUnitSystem } from '@/lib/units';
 import { RefusedMeasurementForm } from './refused-measurement-form';
 
+/** The entry in words: "Tree M-12: Reading of 14.2 in on Mar 3, 2026", "Sap of Mar 14, 2026". */
 function describe(entry: FieldEntry, unit: 'in' | 'cm'): string {
-  if (entry.kind === 'measurement')
-    return `Reading of ${formatDbh(entry.input.dbhCm, unit)} on ${formatDate(entry.input.measuredOn)}`;
-  return `Taphole for ${entry.input.season}`;
+  switch (entry.kind) {
+    case 'measurement':
+      return `Tree ${entry.tag}: Reading of ${formatDbh(entry.input.dbhCm, unit)} on ${formatDate(entry.input.measuredOn)}`;
+    case 'taphole':
+      return `Tree ${entry.tag}: Taphole for ${entry.input.season}`;
+    case 'sap':
+      return `Sap of ${formatDate(entry.input.collectedOn)}`;
+    case 'weather':
+      return `Weather of ${formatDate(entry.input.date)}`;
+  }
 }
 
 /** One refused entry: what it was, the server's reason, and the author's choices. */
@@ -30,9 +38,7 @@ function RefusedItem({ refused }: { refused: RefusedEntry }) {
   };
   return (
     <li className="rounded border border-rule bg-paper p-3">
-      <p className="font-bold">
-        Tree {entry.tag}: {describe(entry, unit)}
-      </p>
+      <p className="font-bold">{describe(entry, unit)}</p>
       <p className="mt-1 text-alert">{refused.message}</p>
       {editing && entry.kind === 'measurement' ? (
         <RefusedMeasurementForm

@@ -1,7 +1,14 @@
-import { screen, waitFor, within } from '@testing-library/react';
+import { QueryClient, dehydrate, hydrate, onlineManager } from '@tanstack/react-query';
+import { act, screen, waitFor, within } from '@testing-library/react';
 import type { Role } from '@shared/schemas/enums';
 import type { SapEntry } from '@shared/schemas/sap';
 import { SeasonLogRoute } from '@/app/routes/season-log';
+import {
+  fieldEntryKeys,
+  refusedEntries,
+  registerFieldEntryDefaults,
+  type FieldEntry,
+} from '@/lib/field-entries';
 import { json, mockApi, type Handler } from '@/test/api-mock';
 import { meAs, sugarbush } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
@@ -43,6 +50,8 @@ function openLog({
     ...routes,
   });
   const view = renderPage({ path: '/sugarbushes/:id/season', url, element: <SeasonLogRoute /> });
+  // New sap and weather go through the device's queue, as the app registers it.
+  registerFieldEntryDefaults(view.queryClient);
   return { api, ...view };
 }
 
@@ -148,6 +157,9 @@ describe('recording a day’s sap', () => {
     await user.click(form.getByRole('button', { name: 'Save sap' }));
     expect(await form.findByText('Sap cannot be collected in the future')).toBeInTheDocument();
     expect(form.getByLabelText('Date')).toHaveAttribute('aria-invalid', 'true');
+    // The form holds the entry and shows why: it is not listed as refused as well.
+    expect(refusedEntries.list()).toEqual([]);
+    expect(form.getByLabelText('Sap volume (L)')).toHaveValue('100');
   });
 
   it('a sap held above 50 °F is a warning, set apart from a caution by its word and its box', async () => {
@@ -544,5 +556,128 @@ describe('weather by hand and from a station', () => {
     await user.click(section.getByRole('button', { name: 'Import 2 days' }));
     expect(await section.findByText('Imported: 2 days new, 0 days replaced.')).toBeInTheDocument();
     expect((api.to(IMPORT)[1].body as FormData).get('dryRun')).toBeNull();
+  });
+});
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
+const POST_WEATHER = 'POST /api/sugarbushes/3/weather';
+
+describe('sap and weather recorded without a network', () => {
+  afterEach(async () => {
+    act(() => onlineManager.setOnline(true));
+    await refusedEntries.clear();
+  });
+
+  it('when sap is saved offline, then the form says it waits and clears; back online it is sent once with its id and the saved entry shows its syrup and caution', async () => {
+    const { api, user, queryClient } = openLog({
+      routes: { [POST_SAP]: savedAs({ cautions: [warmCaution] }) },
+    });
+    const form = within(await sapForm());
+    await user.clear(form.getByLabelText('Date'));
+    await user.type(form.getByLabelText('Date'), '2026-03-14');
+    act(() => onlineManager.setOnline(false));
+    await user.type(form.getByLabelText('Sap volume (L)'), '860');
+    await user.type(form.getByLabelText('Sugar (°Brix)'), '2.5');
+    await user.click(form.getByRole('button', { name: 'Save sap' }));
+
+    expect(
+      await form.findByText(
+        'Kept on this device: the sap of Mar 14, 2026 waits to send and goes out when the network is back.',
+      ),
+    ).toBeInTheDocument();
+    expect(form.getByLabelText('Sap volume (L)')).toHaveValue('');
+    expect(form.getByRole('button', { name: 'Save sap' })).toBeEnabled();
+    expect(api.to(POST_SAP)).toHaveLength(0);
+    expect(queryClient.isMutating({ mutationKey: fieldEntryKeys.all })).toBe(1);
+
+    const reads = api.to('GET /api/sugarbushes/3/sap').length;
+    act(() => onlineManager.setOnline(true));
+    await waitFor(() => expect(api.to(POST_SAP)).toHaveLength(1));
+    const body = api.to(POST_SAP)[0].body as Record<string, unknown>;
+    expect(body).toMatchObject({ collectedOn: '2026-03-14', volumeL: 860, sugarPct: 2.5 });
+    expect(body.clientId).toMatch(UUID);
+    const saved = await screen.findByRole('group', { name: 'Saved entry' });
+    expect(saved).toHaveTextContent('Expected syrup: 25.0 L by the Rule of 86');
+    expect(saved).toHaveTextContent('Caution: Sap held at');
+    // The season log reads again what the entry moved.
+    await waitFor(() => expect(api.to('GET /api/sugarbushes/3/sap').length).toBeGreaterThan(reads));
+    await waitFor(() => expect(queryClient.isMutating()).toBe(0));
+    expect(api.to(POST_SAP)).toHaveLength(1);
+  });
+
+  it('when a day’s weather waits and the page is reloaded, then the restored entry is sent once, with the same id, by the registered sender', async () => {
+    const { api, user, queryClient } = openLog({
+      routes: {
+        [POST_WEATHER]: ((req) => ({
+          status: 201,
+          body: weatherDay({ ...(req.body as object) }),
+        })) satisfies Handler,
+      },
+    });
+    const form = within(await screen.findByRole('region', { name: 'Record a day’s weather' }));
+    await user.clear(form.getByLabelText('Date'));
+    await user.type(form.getByLabelText('Date'), '2026-03-14');
+    act(() => onlineManager.setOnline(false));
+    await user.type(form.getByLabelText('Night low (°C)'), '-4');
+    await user.type(form.getByLabelText('Day high (°C)'), '5');
+    await user.click(form.getByRole('button', { name: 'Save weather' }));
+    expect(
+      await form.findByText(
+        'Kept on this device: the weather of Mar 14, 2026 waits to send and goes out when the network is back.',
+      ),
+    ).toBeInTheDocument();
+
+    // What the device keeps across a reload: the waiting entries, dehydrated as data.
+    const kept = dehydrate(queryClient, {
+      shouldDehydrateQuery: () => false,
+      shouldDehydrateMutation: (m) => m.state.status === 'pending',
+    });
+    expect(kept.mutations).toHaveLength(1);
+    const waiting = kept.mutations[0].state.variables as FieldEntry;
+    expect(waiting).toMatchObject({ kind: 'weather', sugarbushId: 3 });
+    queryClient.getMutationCache().clear();
+
+    const reloaded = new QueryClient();
+    registerFieldEntryDefaults(reloaded);
+    hydrate(reloaded, {
+      ...kept,
+      mutations: kept.mutations.map((m) => ({ ...m, state: { ...m.state, isPaused: true } })),
+    });
+    act(() => onlineManager.setOnline(true));
+    await act(() => reloaded.resumePausedMutations());
+    await waitFor(() => expect(reloaded.isMutating()).toBe(0));
+    expect(api.to(POST_WEATHER)).toHaveLength(1);
+    expect(api.to(POST_WEATHER)[0].body).toEqual({
+      date: '2026-03-14',
+      minC: -4,
+      maxC: 5,
+      clientId: waiting.clientId,
+    });
+  });
+
+  it('when a waiting day is refused once the network is back, then it lands in the refused list with the server’s reason, not on the cleared form', async () => {
+    const { user } = openLog({
+      routes: {
+        [POST_WEATHER]: json(409, {
+          error: { code: 'client-id-conflict', message: 'This entry id was already used' },
+        }),
+      },
+    });
+    const form = within(await screen.findByRole('region', { name: 'Record a day’s weather' }));
+    await user.clear(form.getByLabelText('Date'));
+    await user.type(form.getByLabelText('Date'), '2026-03-14');
+    act(() => onlineManager.setOnline(false));
+    await user.type(form.getByLabelText('Night low (°C)'), '-4');
+    await user.type(form.getByLabelText('Day high (°C)'), '5');
+    await user.click(form.getByRole('button', { name: 'Save weather' }));
+    await form.findByText(/waits to send/);
+    act(() => onlineManager.setOnline(true));
+    await waitFor(() => expect(refusedEntries.list()).toHaveLength(1));
+    expect(refusedEntries.list()[0]).toMatchObject({
+      entry: { kind: 'weather', sugarbushId: 3, input: { date: '2026-03-14', minC: -4, maxC: 5 } },
+      code: 'client-id-conflict',
+      message: 'This entry id was already used',
+    });
+    expect(screen.queryByRole('alert')).not.toBeInTheDocument();
   });
 });

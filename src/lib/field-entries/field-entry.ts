@@ -1,8 +1,11 @@
 import type { Measurement, MeasurementInput } from '@shared/schemas/measurement';
+import type { SapEntry, SapEntryInput } from '@shared/schemas/sap';
 import type { Taphole, TapholeInput } from '@shared/schemas/taphole';
+import type { WeatherDay, WeatherDayInput } from '@shared/schemas/weather';
 
 /**
- * What a forester or a tapper records in the woods: a reading or a drilled hole. Each carries an
+ * What a forester or a tapper records in the woods or at the tank: a reading, a drilled hole, a
+ * day's sap or a day's weather (the last two for a stand, not a tree). Each carries an
  * id made on the device (`clientId`, a UUID), so sending it twice stores it once on the server.
  * Entries are sent through mutations under `fieldEntryKeys.all`, which can wait for the network
  * and survive a reload.
@@ -21,9 +24,21 @@ export type FieldEntry =
       treeId: number;
       tag: string;
       input: TapholeInput;
+    }
+  | {
+      kind: 'sap';
+      clientId: string;
+      sugarbushId: number;
+      input: SapEntryInput;
+    }
+  | {
+      kind: 'weather';
+      clientId: string;
+      sugarbushId: number;
+      input: WeatherDayInput;
     };
 
-export type FieldEntryResult = Measurement | Taphole;
+export type FieldEntryResult = Measurement | Taphole | SapEntry | WeatherDay;
 
 export const fieldEntryKeys = {
   all: ['field-entry'] as const,

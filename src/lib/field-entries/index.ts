@@ -8,3 +8,4 @@ export {
 } from './send-field-entry';
 export { refusedEntries, useRefusedEntries, type RefusedEntry } from './refused-entries';
 export { useSendFieldEntry, useWaitingFieldEntries } from './use-send-field-entry';
+export { useFormFieldEntry, type FormSendCallbacks } from './use-form-field-entry';

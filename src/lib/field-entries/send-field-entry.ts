@@ -10,13 +10,25 @@ import { refusedEntries } from './refused-entries';
 
 export function sendFieldEntry(entry: FieldEntry): Promise<FieldEntryResult> {
   const body = { ...entry.input, clientId: entry.clientId };
-  return entry.kind === 'measurement'
-    ? api.post(`/trees/${entry.treeId}/measurements`, body)
-    : api.post(`/trees/${entry.treeId}/tapholes`, body);
+  switch (entry.kind) {
+    case 'measurement':
+      return api.post(`/trees/${entry.treeId}/measurements`, body);
+    case 'taphole':
+      return api.post(`/trees/${entry.treeId}/tapholes`, body);
+    case 'sap':
+      return api.post(`/sugarbushes/${entry.sugarbushId}/sap`, body);
+    case 'weather':
+      return api.post(`/sugarbushes/${entry.sugarbushId}/weather`, body);
+  }
 }
 
-/** What a stored entry moves: the tree's record and advice, the register, the plan, the map, the round. */
+/**
+ * What a stored entry moves. A reading or a hole: the tree's record and advice, the register, the
+ * plan, the map, the round. A day's sap or weather: the season log (its totals, chart and days).
+ */
 export function refreshAfterFieldEntry(queryClient: QueryClient, entry: FieldEntry) {
+  if (entry.kind === 'sap' || entry.kind === 'weather')
+    return queryClient.invalidateQueries({ queryKey: queryRoots.seasonLog });
   return Promise.all([
     queryClient.invalidateQueries({ queryKey: treeDetailKeys.tree(entry.treeId) }),
     queryClient.invalidateQueries({

@@ -8,10 +8,10 @@ import { Field, controlClass } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
 import { isApiError } from '@/lib/api-client';
 import { collectionLabels } from '@/lib/collection-labels';
+import { newClientId, useFormFieldEntry } from '@/lib/field-entries';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDate } from '@/lib/units';
 import { useCorrectSap } from '../api/correct-sap';
-import { useRecordSap } from '../api/record-sap';
 import {
   blankSapForm,
   sapFields,
@@ -76,13 +76,31 @@ export function SapForm({
   const { errors } = form.formState;
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState<SapEntry>();
-  const record = useRecordSap(sugarbushId);
+  const [waiting, setWaiting] = useState<string>();
+  const clearAmounts = () =>
+    form.reset({
+      ...form.getValues(),
+      volumeL: '',
+      sugarPct: '',
+      heldAtC: '',
+      syrupMadeL: '',
+      note: '',
+    });
+  // A new entry goes through the device's queue: offline it waits there and survives a reload.
+  const record = useFormFieldEntry<SapEntry>((waits) => {
+    if (waits.kind !== 'sap') return;
+    setWaiting(
+      `Kept on this device: the sap of ${formatDate(waits.input.collectedOn)} waits to send and goes out when the network is back.`,
+    );
+    clearAmounts();
+  });
   const correct = useCorrectSap(sugarbushId);
-  const pending = record.isPending || correct.isPending;
+  const pending = record.saving || correct.isPending;
 
   const onSubmit = form.handleSubmit((input) => {
     setFormError(null);
     setSaved(undefined);
+    setWaiting(undefined);
     const onError = (error: unknown) =>
       setFormError(applyServerErrors(error, form.setError, sapFields, messageFor));
     if (entry)
@@ -91,20 +109,17 @@ export function SapForm({
         { onSuccess: (e) => onCorrected?.(e), onError },
       );
     else
-      record.mutate(input, {
-        onSuccess: (e) => {
-          setSaved(e);
-          form.reset({
-            ...form.getValues(),
-            volumeL: '',
-            sugarPct: '',
-            heldAtC: '',
-            syrupMadeL: '',
-            note: '',
-          });
+      record.send(
+        { kind: 'sap', clientId: newClientId(), sugarbushId, input },
+        {
+          onStored: (e, late) => {
+            setWaiting(undefined);
+            setSaved(e);
+            if (!late) clearAmounts();
+          },
+          onRefused: onError,
         },
-        onError,
-      });
+      );
   });
 
   const title = entry
@@ -226,7 +241,7 @@ export function SapForm({
           error={formError}
           pending={pending}
           label={entry ? 'Save correction' : 'Save sap'}
-          notice={saved ? 'Sap saved.' : undefined}
+          notice={saved ? 'Sap saved.' : waiting}
         />
       </form>
       <div aria-live="polite" className="mt-3 empty:hidden">

@@ -1,14 +1,14 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useId, useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
-import type { WeatherDayInput } from '@shared/schemas/weather';
+import type { WeatherDay, WeatherDayInput } from '@shared/schemas/weather';
 import { cn } from '@/components/ui/cn';
 import { Field, controlClass } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
 import { isApiError } from '@/lib/api-client';
+import { newClientId, useFormFieldEntry } from '@/lib/field-entries';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDate } from '@/lib/units';
-import { useRecordWeather } from '../api/record-weather';
 import { dayReason } from '../lib/season-days';
 import type { SeasonUnits } from '../lib/season-units';
 import {
@@ -35,20 +35,31 @@ export function WeatherForm({ sugarbushId, units }: { sugarbushId: number; units
   const { errors } = form.formState;
   const [formError, setFormError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string>();
-  const record = useRecordWeather(sugarbushId);
   const t = units.temperature;
+  const clearReadings = () => form.reset({ ...form.getValues(), minC: '', maxC: '' });
+  // Sent through the device's queue: offline the day waits there and survives a reload.
+  const record = useFormFieldEntry<WeatherDay>((waits) => {
+    if (waits.kind !== 'weather') return;
+    setNotice(
+      `Kept on this device: the weather of ${formatDate(waits.input.date)} waits to send and goes out when the network is back.`,
+    );
+    clearReadings();
+  });
 
   const onSubmit = form.handleSubmit((input) => {
     setFormError(null);
     setNotice(undefined);
-    record.mutate(input, {
-      onSuccess: (day) => {
-        setNotice(`Saved ${formatDate(day.date)}: ${dayReason(day, t)}.`);
-        form.reset({ ...form.getValues(), minC: '', maxC: '' });
+    record.send(
+      { kind: 'weather', clientId: newClientId(), sugarbushId, input },
+      {
+        onStored: (day, late) => {
+          setNotice(`Saved ${formatDate(day.date)}: ${dayReason(day, t)}.`);
+          if (!late) clearReadings();
+        },
+        onRefused: (error) =>
+          setFormError(applyServerErrors(error, form.setError, weatherFields, messageFor)),
       },
-      onError: (error) =>
-        setFormError(applyServerErrors(error, form.setError, weatherFields, messageFor)),
-    });
+    );
   });
 
   const temperature = (name: 'minC' | 'maxC', label: string) => (
@@ -83,7 +94,7 @@ export function WeatherForm({ sugarbushId, units }: { sugarbushId: number; units
         </div>
         <FormFooter
           error={formError}
-          pending={record.isPending}
+          pending={record.saving}
           label="Save weather"
           notice={notice}
         />
