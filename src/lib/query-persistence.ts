@@ -18,7 +18,7 @@ export const CACHE_MAX_AGE_MS = 14 * 24 * 3600_000;
 
 /**
  * The reads kept on the device for the woods: who is signed in, the stand, the measuring round,
- * each tree's record and advice, and the season plan. The map's columns and the lists are not:
+ * each tree's record and advice, the season plan and the season log. The map's columns and the lists are not:
  * they are large and asked for again on the way out.
  */
 const keptRoots = new Set<unknown>([
@@ -27,6 +27,8 @@ const keptRoots = new Set<unknown>([
   queryRoots.round[0],
   queryRoots.trees[0],
   queryRoots.plans[0],
+  // The season log is read at the sugarhouse and by the tanks, often out of coverage.
+  queryRoots.seasonLog[0],
 ]);
 
 const CACHE_KEY = 'query-cache';
