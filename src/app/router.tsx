@@ -7,9 +7,6 @@ import { RouteError } from './route-error';
 import { AppShell } from './shell/app-shell';
 import type { SectionHandle } from './shell/sections';
 
-/** Sections shown as "Coming soon" until they are built. */
-const planned: SectionKey[] = [];
-
 const handle = (section: SectionKey): SectionHandle => ({ section });
 
 /** Every page is its own lazily loaded module; loaders that need the cache get it here. */
@@ -158,13 +155,6 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                 Component: (await import('./routes/settings')).SettingsRoute,
               }),
             },
-            ...planned.map((section) => ({
-              path: paths[section].path,
-              handle: handle(section),
-              lazy: async () => ({
-                Component: (await import('./routes/coming-soon')).ComingSoonRoute,
-              }),
-            })),
             {
               path: '*',
               lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
