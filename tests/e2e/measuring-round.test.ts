@@ -44,6 +44,20 @@ async function measureCurrent(page: Page): Promise<{ tag: string; treeId: number
   return { tag, treeId: tree.id };
 }
 
+/** How many field entries the device's store holds for sending (read in the page). */
+const keptQueueLength = () =>
+  new Promise<number>((resolve) => {
+    const open = indexedDB.open('clearwood');
+    open.onerror = () => resolve(-1);
+    open.onsuccess = () => {
+      const db = open.result;
+      if (!db.objectStoreNames.contains('device')) return resolve(0);
+      const read = db.transaction('device').objectStore('device').get('field-entry-queue');
+      read.onsuccess = () => resolve(Array.isArray(read.result) ? read.result.length : 0);
+      read.onerror = () => resolve(-1);
+    };
+  });
+
 const openRound = async (page: Page) => {
   await page.goto(`${env.server.url}/sugarbushes/${standId}/round`);
   await page.locator('#round-tree').waitFor({ timeout: 20000 });
@@ -85,6 +99,9 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     await context.setOffline(true);
     const offline = [await measureCurrent(page), await measureCurrent(page)];
     await page.getByText('2 waiting to send').waitFor();
+    // The entries are on the device (IndexedDB) before the page goes: a reload a moment after
+    // the tap could otherwise outrun the write on a loaded machine.
+    await expect.poll(() => page.evaluate(keptQueueLength), { timeout: 10000 }).toBe(2);
 
     // Reloaded without a network: the shell comes from the service worker, the queue from IndexedDB.
     await page.reload();
