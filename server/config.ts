@@ -102,6 +102,11 @@ const envSchema = z.object({
     .int()
     .min(1)
     .default(20 * 1024 * 1024),
+  /**
+   * Tests only, refused in production: a pause in milliseconds after each batch of rows an import
+   * writes, so that a crash test can kill the server while an import's transaction is half written.
+   */
+  IMPORT_WRITE_PAUSE_MS: z.coerce.number().int().min(0).max(1000).default(0),
   /** Folder for `npm run backup`; defaults to `backups/` beside the database file. */
   BACKUP_DIR: z.string().min(1).optional(),
   /** How many backups `npm run backup` keeps (the newest ones). */
@@ -186,6 +191,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     );
   if (production && c.DEV_OUTBOX_VIEW)
     problems.push('DEV_OUTBOX_VIEW: the outbox view is for development only, never in production');
+  if (production && c.IMPORT_WRITE_PAUSE_MS > 0)
+    problems.push('IMPORT_WRITE_PAUSE_MS: a pause for crash tests, never in production');
   if (c.PHOTO_STORAGE === 's3') {
     if (!c.PHOTO_S3_BUCKET) problems.push('PHOTO_S3_BUCKET: required when PHOTO_STORAGE=s3');
     if (!c.PHOTO_S3_REGION) problems.push('PHOTO_S3_REGION: required when PHOTO_STORAGE=s3');

@@ -65,6 +65,17 @@ describe('production defaults', () => {
     expect(loadConfig({}).TRUST_PROXY).toBe(false);
   });
 
+  it("when production is given the crash tests' write pause, then the server refuses it", () => {
+    const base = { NODE_ENV: 'production', SESSION_SECRET: 'a-real-secret-of-some-length' };
+    expect(() => loadConfig({ ...base, IMPORT_WRITE_PAUSE_MS: '20' })).toThrow(
+      /IMPORT_WRITE_PAUSE_MS/,
+    );
+    expect(loadConfig({ ...base, IMPORT_WRITE_PAUSE_MS: '0' }).IMPORT_WRITE_PAUSE_MS).toBe(0);
+    expect(
+      loadConfig({ NODE_ENV: 'test', IMPORT_WRITE_PAUSE_MS: '20' }).IMPORT_WRITE_PAUSE_MS,
+    ).toBe(20);
+  });
+
   it('when served behind HTTPS, then HSTS is sent; on plain http it is not', async () => {
     const secure = await makeTestApp({ COOKIE_SECURE: 'true' });
     closers.push(secure.close);

@@ -31,8 +31,15 @@ export interface BenchServer {
   stop(): Promise<void>;
 }
 
-/** Start `server/index.ts` under tsx on a copy of a database file; resolves once it answers. */
-export async function startBenchServer(opts: { dbFile: string; logFile: string }) {
+/**
+ * Start `server/index.ts` under tsx on a copy of a database file; resolves once it answers. `env`
+ * adds or overrides settings (a crash test's pause, say).
+ */
+export async function startBenchServer(opts: {
+  dbFile: string;
+  logFile: string;
+  env?: Record<string, string>;
+}) {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   const log = fs.openSync(opts.logFile, 'a');
@@ -54,6 +61,7 @@ export async function startBenchServer(opts: { dbFile: string; logFile: string }
         SESSION_SECRET: 'clearwood-bench-session-secret',
         SEED_DEMO: 'false',
         LOGIN_RATE_LIMIT: '1000',
+        ...opts.env,
       },
     },
   );

@@ -11,8 +11,14 @@ export function chunks<T>(xs: readonly T[], size = BATCH): T[][] {
   return out;
 }
 
-/** Let other requests' callbacks run between two statements of a long write. */
-const breathe = () => new Promise<void>((resolve) => setImmediate(resolve));
+/**
+ * Let other requests' callbacks run between two statements of a long write; with a pause (crash
+ * tests only, `IMPORT_WRITE_PAUSE_MS`), wait that long as well.
+ */
+const breathe = (pauseMs: number) =>
+  new Promise<void>((resolve) =>
+    pauseMs > 0 ? setTimeout(resolve, pauseMs) : setImmediate(resolve),
+  );
 
 /** Told the rows written so far, after each batch. */
 type Written = (rows: number) => void;
@@ -44,7 +50,8 @@ export interface StoredTaphole {
   collection: string;
 }
 
-export function importsRepository(db: Knex) {
+export function importsRepository(db: Knex, opts: { writePauseMs?: number } = {}) {
+  const pauseMs = opts.writePauseMs ?? 0;
   return {
     /** The stand's trees with these tags. */
     async treesByTag(
@@ -127,7 +134,7 @@ export function importsRepository(db: Knex) {
           .returning(['id']);
         for (const m of made) ids.push(Number(m.id));
         written(ids.length);
-        await breathe();
+        await breathe(pauseMs);
       }
       return ids;
     },
@@ -161,7 +168,7 @@ export function importsRepository(db: Knex) {
           })),
         );
         written((n += part.length));
-        await breathe();
+        await breathe(pauseMs);
       }
     },
 
@@ -185,7 +192,7 @@ export function importsRepository(db: Knex) {
           })),
         );
         written((n += part.length));
-        await breathe();
+        await breathe(pauseMs);
       }
     },
   };

@@ -57,6 +57,7 @@ export function importsService(ctx: AppContext) {
           dryRun,
           sugarbushId: access.sugarbushId,
           userId: access.userId,
+          writePauseMs: ctx.config.IMPORT_WRITE_PAUSE_MS,
         },
         step,
       );

@@ -1,3 +1,4 @@
+import fs from 'node:fs';
 import type { Knex } from 'knex';
 import {
   REPORTED_ROWS,
@@ -35,6 +36,8 @@ export interface ImportTask {
   dryRun: boolean;
   sugarbushId: number;
   userId: number;
+  /** Crash tests only: a pause after each written batch (`IMPORT_WRITE_PAUSE_MS`). */
+  writePauseMs?: number;
 }
 
 /**
@@ -92,7 +95,7 @@ export async function runImport(
   const seasons = await db.transaction(async (trx) => {
     // Reads, then writes, on the worker's own connection: the lock first (a dry run writes nothing).
     if (!dryRun) await takeWriteLock(trx, 'sugarbushes', sugarbushId);
-    const repo = importsRepository(trx);
+    const repo = importsRepository(trx, { writePauseMs: task.writePauseMs });
     const trees = await repo.treesByTag(
       sugarbushId,
       read.records.map((r) => r.tag),
@@ -106,7 +109,10 @@ export async function runImport(
     if (matched.create.length + matched.update.length === 0) return [];
 
     const total = matched.create.length + matched.update.length;
-    const written = (done: number) => step({ phase: 'writing', done, total });
+    const written = (done: number) => {
+      step({ phase: 'writing', done, total });
+      if (task.writePauseMs) noteUncommitted(done, total);
+    };
     written(0);
     let touched: number[];
     if (kind === 'trees') {
@@ -139,6 +145,15 @@ export async function runImport(
     return recordsImported(trx, sugarbushId, touched);
   });
   return { result: capped(result, read.waypoints), seasons, trees: changed };
+}
+
+/**
+ * With the crash tests' pause on, a line on stderr after each written batch, straight from this
+ * worker thread (the request thread may be waiting on the write lock): a test reads the log to
+ * kill the server while the transaction is half written.
+ */
+function noteUncommitted(done: number, total: number) {
+  fs.writeSync(2, `import: ${done} of ${total} rows written, not committed yet\n`);
 }
 
 /** Entries of the first `REPORTED_ROWS` rows that have one, in row order. */
