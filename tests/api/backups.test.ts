@@ -16,6 +16,7 @@ import { BackupError } from '../../server/modules/backups/sqlite-file';
 import { listBackups, takeBackup } from '../../server/modules/backups/take-backup';
 import { solidPng, writeMbtiles } from './mbtiles-fixture';
 import { addTree, makeTestApp, recordsWritten, signIn, standWithTeam } from './test-app';
+import { damageOneIndexEntry } from './sqlite-damage';
 import { onPostgres } from './test-database';
 import { checkConsistent, treesCsv, type AckedWrite } from './write-traffic';
 
@@ -244,6 +245,38 @@ describe.skipIf(onPostgres)('restoring a backup (SQLite only)', () => {
       await expect(restoreBackup(config, bad)).rejects.toThrow(BackupError);
       await expect(restoreBackup(config, bad)).rejects.toThrow(/nothing was changed/);
     }
+    expect(fs.readFileSync(live).equals(bytes)).toBe(true);
+    expect(fs.readdirSync(path.dirname(live)).filter((f) => /restor/.test(f))).toEqual([]);
+  });
+
+  it('when only one index entry of the backup is spoiled, then the integrity check alone finds it and restore refuses', async () => {
+    const { live, config, backup } = await liveAndBackup('index');
+    const bytes = fs.readFileSync(live);
+    const spoiled = path.join(scratch, 'index-spoiled.sqlite');
+    fs.copyFileSync(path.join(backup, 'clearwood.sqlite'), spoiled);
+    const { index } = damageOneIndexEntry(spoiled, 'measurements');
+
+    // The file opens and answers every read the restore makes besides the check: its
+    // migrations, each table's rows. Without `PRAGMA integrity_check` it would go in.
+    const db = new Database(spoiled, { readonly: true, fileMustExist: true });
+    try {
+      expect(db.prepare('select count(*) as n from knex_migrations').get()).toMatchObject({
+        n: fs.readdirSync(migrationsDir).filter((f) => /^\d{14}_[\w-]+\.ts$/.test(f)).length,
+      });
+      expect(
+        (db.prepare('select count(*) as n from measurements').get() as { n: number }).n,
+      ).toBeGreaterThan(1);
+      const problems = (db.pragma('integrity_check') as { integrity_check: string }[]).map(
+        (r) => r.integrity_check,
+      );
+      expect(problems.join('\n')).toContain(index);
+    } finally {
+      db.close();
+    }
+
+    await expect(restoreBackup(config, spoiled)).rejects.toThrow(
+      new RegExp(`fails its integrity check \\(.*${index}.*\\); nothing was changed`),
+    );
     expect(fs.readFileSync(live).equals(bytes)).toBe(true);
     expect(fs.readdirSync(path.dirname(live)).filter((f) => /restor/.test(f))).toEqual([]);
   });
