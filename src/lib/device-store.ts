@@ -6,10 +6,14 @@ import { createStore, del, get, set, type UseStore } from 'idb-keyval';
  * (`field-entries/refused-entries.ts`) and whose they are. Created on first use, so nothing
  * touches IndexedDB where it is not there (tests in jsdom).
  */
+/** The IndexedDB database and object store the device's keys live in. */
+export const DEVICE_DB = 'clearwood';
+export const DEVICE_STORE = 'device';
+
 let store: UseStore | null = null;
 const deviceStore = (): UseStore | null => {
   if (typeof indexedDB === 'undefined') return null;
-  store ??= createStore('clearwood', 'device');
+  store ??= createStore(DEVICE_DB, DEVICE_STORE);
   return store;
 };
 

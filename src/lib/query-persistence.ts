@@ -32,7 +32,8 @@ const keptRoots = new Set<unknown>([
 ]);
 
 const CACHE_KEY = 'query-cache';
-const QUEUE_KEY = 'field-entry-queue';
+/** The device key of the field entries waiting to be sent. */
+export const QUEUE_KEY = 'field-entry-queue';
 const OWNER_KEY = 'owner';
 
 interface StoredCache {

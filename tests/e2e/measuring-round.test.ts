@@ -1,5 +1,7 @@
 import type { Page } from 'playwright-core';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { DEVICE_DB, DEVICE_STORE } from '../../src/lib/device-store';
+import { QUEUE_KEY } from '../../src/lib/query-persistence';
 import { refreshTrees } from '../../server/modules/advice/refresh-trees';
 import { demoServerAndBrowser, offSite, recordHosts, signInAs } from './harness';
 import { checkedViewports, expectReadable, shortButtons, signedInForChecks } from './page-checks';
@@ -45,18 +47,19 @@ async function measureCurrent(page: Page): Promise<{ tag: string; treeId: number
 }
 
 /** How many field entries the device's store holds for sending (read in the page). */
-const keptQueueLength = () =>
+const keptQueueLength = (at: { db: string; store: string; key: string }) =>
   new Promise<number>((resolve) => {
-    const open = indexedDB.open('clearwood');
+    const open = indexedDB.open(at.db);
     open.onerror = () => resolve(-1);
     open.onsuccess = () => {
       const db = open.result;
-      if (!db.objectStoreNames.contains('device')) return resolve(0);
-      const read = db.transaction('device').objectStore('device').get('field-entry-queue');
+      if (!db.objectStoreNames.contains(at.store)) return resolve(0);
+      const read = db.transaction(at.store).objectStore(at.store).get(at.key);
       read.onsuccess = () => resolve(Array.isArray(read.result) ? read.result.length : 0);
       read.onerror = () => resolve(-1);
     };
   });
+const queueAt = { db: DEVICE_DB, store: DEVICE_STORE, key: QUEUE_KEY };
 
 const openRound = async (page: Page) => {
   await page.goto(`${env.server.url}/sugarbushes/${standId}/round`);
@@ -101,7 +104,7 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     await page.getByText('2 waiting to send').waitFor();
     // The entries are on the device (IndexedDB) before the page goes: a reload a moment after
     // the tap could otherwise outrun the write on a loaded machine.
-    await expect.poll(() => page.evaluate(keptQueueLength), { timeout: 10000 }).toBe(2);
+    await expect.poll(() => page.evaluate(keptQueueLength, queueAt), { timeout: 10000 }).toBe(2);
 
     // Reloaded without a network: the shell comes from the service worker, the queue from IndexedDB.
     await page.reload();
