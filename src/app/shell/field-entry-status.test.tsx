@@ -142,3 +142,125 @@ describe('a stand’s sap and weather in the queue', () => {
     expect(refusedEntries.list().map((r) => r.entry.kind)).toEqual(['weather']);
   });
 });
+
+describe('editing a refused entry of any kind', () => {
+  const renderRefused = (refused: Parameters<typeof refusedEntries.add>[0]) => {
+    refusedEntries.add(refused);
+    const rendered = renderPage({ path: '/', url: '/', element: <FieldEntryStatus /> });
+    registerFieldEntryDefaults(rendered.queryClient);
+    return rendered;
+  };
+
+  it('when a refused day of weather is edited, then the server’s reason sits on its field, the shared schema checks the change, and the corrected day is sent', async () => {
+    const api = mockApi({
+      'GET /api/auth/me': meAs('tapper'),
+      'POST /api/sugarbushes/3/weather': json(201, { date: '2026-03-14' }),
+    });
+    const { user } = renderRefused({
+      entry: weather,
+      code: 'invalid-input',
+      message: 'Check the day high',
+      fields: { maxC: 'The day high was typed in °F' },
+      refusedAt: '2026-03-14T12:00:00Z',
+    });
+    await user.click(await screen.findByRole('button', { name: 'Review' }));
+    await user.click(screen.getByRole('button', { name: 'Edit and send again' }));
+    const high = screen.getByLabelText('Day high (°C)');
+    expect(high).toHaveAccessibleDescription('The day high was typed in °F');
+    await user.clear(high);
+    await user.type(high, '-6');
+    await user.click(screen.getByRole('button', { name: 'Send again' }));
+    expect(await screen.findByText('The day high cannot be below the night low')).toBeVisible();
+    expect(api.to('POST /api/sugarbushes/3/weather')).toHaveLength(0);
+    await user.clear(high);
+    await user.type(high, '6.5');
+    await user.click(screen.getByRole('button', { name: 'Send again' }));
+    await waitFor(() => expect(api.to('POST /api/sugarbushes/3/weather')).toHaveLength(1));
+    const body = api.to('POST /api/sugarbushes/3/weather')[0].body as Record<string, unknown>;
+    expect(body).toMatchObject({ date: '2026-03-14', minC: -4, maxC: 6.5 });
+    expect(body.clientId).not.toBe(weather.clientId);
+    expect(refusedEntries.list()).toEqual([]);
+  });
+
+  it('when a refused day of sap is edited, then its optional fields go as null when left empty and the rest as typed', async () => {
+    const api = mockApi({
+      'GET /api/auth/me': meAs('tapper'),
+      'POST /api/sugarbushes/3/sap': json(201, { id: 9 }),
+    });
+    const { user } = renderRefused({
+      entry: { ...sap, input: { ...sap.input, heldAtC: 3, note: 'Tank 2' } },
+      code: 'invalid-input',
+      message: 'Check the sugar content',
+      fields: { sugarPct: 'Maple sap is rarely above 12 °Brix: check the refractometer' },
+      refusedAt: '2026-03-14T12:00:00Z',
+    });
+    await user.click(await screen.findByRole('button', { name: 'Review' }));
+    await user.click(screen.getByRole('button', { name: 'Edit and send again' }));
+    expect(screen.getByLabelText('Sugar (°Brix)')).toHaveAccessibleDescription(
+      /rarely above 12 °Brix/,
+    );
+    await user.clear(screen.getByLabelText('Sugar (°Brix)'));
+    await user.type(screen.getByLabelText('Sugar (°Brix)'), '2.8');
+    await user.clear(screen.getByLabelText('Held at (°C)'));
+    await user.selectOptions(screen.getByLabelText('Collection'), 'Vacuum tubing');
+    await user.click(screen.getByRole('button', { name: 'Send again' }));
+    await waitFor(() => expect(api.to('POST /api/sugarbushes/3/sap')).toHaveLength(1));
+    const body = api.to('POST /api/sugarbushes/3/sap')[0].body as Record<string, unknown>;
+    expect(body).toMatchObject({
+      collectedOn: '2026-03-14',
+      volumeL: 860,
+      sugarPct: 2.8,
+      heldAtC: null,
+      collection: 'vacuum',
+      syrupMadeL: null,
+      note: 'Tank 2',
+    });
+  });
+
+  it('when a refused taphole is edited, then an out-of-range depth is stopped by the shared schema and the corrected hole is sent to its tree', async () => {
+    const api = mockApi({
+      'GET /api/auth/me': meAs('tapper'),
+      'POST /api/trees/5/tapholes': json(201, { id: 4 }),
+    });
+    const taphole: FieldEntry = {
+      kind: 'taphole',
+      clientId: '9c8b7a6d-5e4f-4a3b-9c2d-1e0f9a8b7c6d',
+      treeId: 5,
+      tag: 'B-5',
+      input: {
+        season: 2026,
+        heightCm: 95,
+        azimuthDeg: 140,
+        depthCm: 5,
+        bitCm: 0.79,
+        collection: 'gravity',
+        stainHit: true,
+      },
+    };
+    const { user } = renderRefused({
+      entry: taphole,
+      code: 'too-close',
+      message: 'Within 15 cm of a hole drilled in 2025',
+      refusedAt: '2026-03-02T12:00:00Z',
+    });
+    await user.click(await screen.findByRole('button', { name: 'Review' }));
+    await user.click(screen.getByRole('button', { name: 'Edit and send again' }));
+    expect(screen.getByText('Tree B-5: Taphole for 2026')).toBeVisible();
+    expect(screen.getAllByText('Within 15 cm of a hole drilled in 2025')).toHaveLength(1);
+    expect(screen.getByLabelText(/Hit stained wood/)).toHaveValue('yes');
+    await user.clear(screen.getByLabelText('Depth (cm)'));
+    await user.type(screen.getByLabelText('Depth (cm)'), '12');
+    await user.click(screen.getByRole('button', { name: 'Send again' }));
+    expect(await screen.findByText(/A hole is 1–8 cm deep/)).toBeVisible();
+    await user.clear(screen.getByLabelText('Depth (cm)'));
+    await user.type(screen.getByLabelText('Depth (cm)'), '4.5');
+    await user.clear(screen.getByLabelText('Azimuth (°)'));
+    await user.type(screen.getByLabelText('Azimuth (°)'), '200');
+    await user.selectOptions(screen.getByLabelText(/Hit stained wood/), 'Not noted');
+    await user.click(screen.getByRole('button', { name: 'Send again' }));
+    await waitFor(() => expect(api.to('POST /api/trees/5/tapholes')).toHaveLength(1));
+    const body = api.to('POST /api/trees/5/tapholes')[0].body as Record<string, unknown>;
+    expect(body).toMatchObject({ season: 2026, azimuthDeg: 200, depthCm: 4.5, stainHit: null });
+    expect(body.clientId).not.toBe(taphole.clientId);
+  });
+});

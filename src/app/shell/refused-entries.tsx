@@ -8,7 +8,10 @@ import {
   type RefusedEntry,
 } from '@/lib/field-entries';
 import { formatDate, formatDbh, useUnitSystem } from '@/lib/units';
-import { RefusedMeasurementForm } from './refused-measurement-form';
+import { RefusedMeasurementForm } from './refused/refused-measurement-form';
+import { RefusedSapForm } from './refused/refused-sap-form';
+import { RefusedTapholeForm } from './refused/refused-taphole-form';
+import { RefusedWeatherForm } from './refused/refused-weather-form';
 
 /** The entry in words: "Tree M-12: Reading of 14.2 in on Mar 3, 2026", "Sap of Mar 14, 2026". */
 function describe(entry: FieldEntry, unit: 'in' | 'cm'): string {
@@ -24,6 +27,53 @@ function describe(entry: FieldEntry, unit: 'in' | 'cm'): string {
   }
 }
 
+/** The form that edits this kind of entry. */
+function EditForm({
+  refused,
+  onSend,
+  onCancel,
+}: {
+  refused: RefusedEntry;
+  onSend: (next: FieldEntry) => void;
+  onCancel: () => void;
+}) {
+  const { entry } = refused;
+  switch (entry.kind) {
+    case 'measurement':
+      return (
+        <RefusedMeasurementForm
+          refused={{ ...refused, entry }}
+          onCancel={onCancel}
+          onSend={(input) => onSend({ ...entry, input })}
+        />
+      );
+    case 'taphole':
+      return (
+        <RefusedTapholeForm
+          refused={{ ...refused, entry }}
+          onCancel={onCancel}
+          onSend={(input) => onSend({ ...entry, input })}
+        />
+      );
+    case 'sap':
+      return (
+        <RefusedSapForm
+          refused={{ ...refused, entry }}
+          onCancel={onCancel}
+          onSend={(input) => onSend({ ...entry, input })}
+        />
+      );
+    case 'weather':
+      return (
+        <RefusedWeatherForm
+          refused={{ ...refused, entry }}
+          onCancel={onCancel}
+          onSend={(input) => onSend({ ...entry, input })}
+        />
+      );
+  }
+}
+
 /** One refused entry: what it was, the server's reason, and the author's choices. */
 function RefusedItem({ refused }: { refused: RefusedEntry }) {
   const { unit } = useUnitSystem();
@@ -31,21 +81,17 @@ function RefusedItem({ refused }: { refused: RefusedEntry }) {
   const [editing, setEditing] = useState(false);
   const [confirmDiscard, setConfirmDiscard] = useState(false);
   const { entry } = refused;
-  // A new id: the refused one was never stored, and its content may change.
+  // A new id (the refused one was never stored, and its content may change).
   const resend = (next: FieldEntry) => {
     refusedEntries.remove(entry.clientId);
-    send.mutate(next);
+    send.mutate({ ...next, clientId: newClientId() });
   };
   return (
     <li className="rounded border border-rule bg-paper p-3">
       <p className="font-bold">{describe(entry, unit)}</p>
       <p className="mt-1 text-alert">{refused.message}</p>
-      {editing && entry.kind === 'measurement' ? (
-        <RefusedMeasurementForm
-          refused={{ ...refused, entry }}
-          onCancel={() => setEditing(false)}
-          onSend={(input) => resend({ ...entry, clientId: newClientId(), input })}
-        />
+      {editing ? (
+        <EditForm refused={refused} onCancel={() => setEditing(false)} onSend={resend} />
       ) : confirmDiscard ? (
         <div role="group" aria-label="Discard the entry" className="mt-2">
           <p>Discard this entry? It was never stored and will be gone from this device.</p>
@@ -60,12 +106,12 @@ function RefusedItem({ refused }: { refused: RefusedEntry }) {
         </div>
       ) : (
         <div className="mt-2 flex flex-wrap gap-3">
-          {entry.kind === 'measurement' ? (
-            <Button field onClick={() => setEditing(true)}>
-              Edit and send again
-            </Button>
-          ) : (
-            <Button field onClick={() => resend({ ...entry, clientId: newClientId() })}>
+          <Button field onClick={() => setEditing(true)}>
+            Edit and send again
+          </Button>
+          {/* A reading refused for its content is sent again only after a look at it. */}
+          {entry.kind !== 'measurement' && (
+            <Button field onClick={() => resend(entry)}>
               Send again
             </Button>
           )}

@@ -1,20 +1,14 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useState } from 'react';
-import { useForm } from 'react-hook-form';
 import {
   crownDiebackClasses,
   measurementInputSchema,
   type MeasurementInput,
 } from '@shared/schemas/measurement';
-import { Button } from '@/components/ui/button';
 import { controlClass, Field } from '@/components/ui/field';
-import { ApiError } from '@/lib/api-client';
-import { applyServerErrors } from '@/lib/form-errors';
 import type { RefusedEntry } from '@/lib/field-entries';
+import { RefusedFormActions } from './refused-form-actions';
+import { noteOrNull, optionalNumber, useRefusedForm } from './use-refused-form';
 
 const fields = ['measuredOn', 'dbhCm', 'crownDiebackPct', 'note', 'confirmedOutlier'] as const;
-
-const optionalNumber = (v: unknown) => (v === '' || v === null ? null : Number(v));
 
 /**
  * Edits a refused reading before it is sent again (in cm, as the API holds it). The server's
@@ -30,30 +24,21 @@ export function RefusedMeasurementForm({
   onCancel: () => void;
 }) {
   const { input } = refused.entry;
-  const form = useForm<MeasurementInput>({
-    resolver: zodResolver(measurementInputSchema),
-    defaultValues: {
+  const { form, formError } = useRefusedForm<MeasurementInput>({
+    schema: measurementInputSchema,
+    defaults: {
       measuredOn: input.measuredOn,
       dbhCm: input.dbhCm,
       crownDiebackPct: input.crownDiebackPct ?? null,
       note: input.note ?? '',
       confirmedOutlier: input.confirmedOutlier ?? false,
     },
+    refused,
+    fields,
   });
   const { errors } = form.formState;
-  const [formError, setFormError] = useState<string | null>(null);
-  // The server's reason, on the fields it names; the rest above the button.
-  useEffect(() => {
-    setFormError(
-      applyServerErrors(
-        new ApiError(409, refused.code, refused.message, refused.fields),
-        form.setError,
-        fields,
-      ),
-    );
-  }, [refused, form.setError]);
   const onSubmit = form.handleSubmit((values) =>
-    onSend({ ...values, note: values.note ? values.note : null }),
+    onSend({ ...values, note: noteOrNull(values.note) }),
   );
   return (
     <form noValidate onSubmit={onSubmit} className="mt-3 flex flex-col gap-3">
@@ -106,15 +91,7 @@ export function RefusedMeasurementForm({
           measured again: this reading is right
         </label>
       )}
-      {formError && <p className="text-sm text-alert">{formError}</p>}
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" variant="primary" field>
-          Send again
-        </Button>
-        <Button onClick={onCancel} field>
-          Cancel
-        </Button>
-      </div>
+      <RefusedFormActions formError={formError} onCancel={onCancel} />
     </form>
   );
 }
