@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import os from 'node:os';
+import net from 'node:net';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll } from 'vitest';
@@ -81,3 +82,52 @@ export function demoServerAndBrowser(): { server: DemoServer; browser: Browser }
 /** The hosts a page asked that are not this machine: every browser test expects none. */
 export const offSite = (hosts: Set<string>) =>
   [...hosts].filter((h) => h !== 'localhost' && h !== '127.0.0.1');
+
+/**
+ * A TCP relay in front of the server whose link a test can cut, as a phone loses coverage.
+ * Chromium's emulated offline (`context.setOffline`) does not hold across a reload: the new
+ * document's first requests may go out before it is applied again, unseen by the page's events.
+ * Cut, the relay drops every open connection and resets each new one, so nothing reaches the
+ * server whatever the emulation does; use both.
+ */
+export async function cuttableLink(target: string) {
+  const { hostname, port } = new URL(target);
+  const open = new Set<net.Socket>();
+  let cut = false;
+  const relay = net.createServer((client) => {
+    if (cut) return client.resetAndDestroy();
+    const upstream = net.connect(Number(port), hostname);
+    open.add(client).add(upstream);
+    const end = () => {
+      client.destroy();
+      upstream.destroy();
+      open.delete(client);
+      open.delete(upstream);
+    };
+    for (const s of [client, upstream]) s.on('error', end).on('close', end);
+    client.pipe(upstream).pipe(client);
+  });
+  await new Promise<void>((resolve) => relay.listen(0, '127.0.0.1', resolve));
+  const { port: relayPort } = relay.address() as net.AddressInfo;
+  const drop = () => {
+    for (const s of open) s.destroy();
+    open.clear();
+  };
+  return {
+    /** The server's address through the relay (another origin than the server's own). */
+    url: `http://127.0.0.1:${relayPort}`,
+    cut() {
+      cut = true;
+      drop();
+    },
+    restore() {
+      cut = false;
+    },
+    close: () =>
+      new Promise<void>((resolve) => {
+        cut = true;
+        drop();
+        relay.close(() => resolve());
+      }),
+  };
+}

@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { DEVICE_DB, DEVICE_STORE } from '../../src/lib/device-store';
 import { QUEUE_KEY } from '../../src/lib/query-persistence';
 import { refreshTrees } from '../../server/modules/advice/refresh-trees';
-import { demoServerAndBrowser, offSite, recordHosts, signInAs } from './harness';
+import { cuttableLink, demoServerAndBrowser, offSite, recordHosts, signInAs } from './harness';
 import { checkedViewports, expectReadable, shortButtons, signedInForChecks } from './page-checks';
 
 const env = demoServerAndBrowser();
@@ -61,8 +61,8 @@ const keptQueueLength = (at: { db: string; store: string; key: string }) =>
   });
 const queueAt = { db: DEVICE_DB, store: DEVICE_STORE, key: QUEUE_KEY };
 
-const openRound = async (page: Page) => {
-  await page.goto(`${env.server.url}/sugarbushes/${standId}/round`);
+const openRound = async (page: Page, base = env.server.url) => {
+  await page.goto(`${base}/sugarbushes/${standId}/round`);
   await page.locator('#round-tree').waitFor({ timeout: 20000 });
 };
 
@@ -71,9 +71,18 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     const context = await env.browser.newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();
     const hosts = recordHosts(page);
-    await signInAs(page, env.server.url, 'forester@fernside.example');
+    // The phone reaches the server through a link the test cuts when it goes out of coverage.
+    const link = await cuttableLink(env.server.url);
+    // The page is told first going out and last coming back, so it never sees a dead link
+    // while it thinks it is online.
+    const offline = async (off: boolean) => {
+      if (!off) link.restore();
+      await context.setOffline(off);
+      if (off) link.cut();
+    };
+    await signInAs(page, link.url, 'forester@fernside.example');
     await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
-    await openRound(page);
+    await openRound(page, link.url);
     // The service worker has the shell before the network goes.
     await page.evaluate(async () => {
       await navigator.serviceWorker.ready;
@@ -99,8 +108,8 @@ describe('the forester walks the measuring round on a phone, in and out of cover
       )
       .toEqual([1, 1, 1]);
 
-    await context.setOffline(true);
-    const offline = [await measureCurrent(page), await measureCurrent(page)];
+    await offline(true);
+    const measuredOffline = [await measureCurrent(page), await measureCurrent(page)];
     await page.getByText('2 waiting to send').waitFor();
     // The entries are on the device (IndexedDB) before the page goes: a reload a moment after
     // the tap could otherwise outrun the write on a loaded machine.
@@ -113,7 +122,7 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     await page.getByText(/You.re offline/).waitFor();
     expect(await page.evaluate(() => navigator.serviceWorker.controller !== null)).toBe(true);
     await page.getByText(`5 of ${due.toLocaleString('en-US')} measured in ${season}`).waitFor();
-    for (const t of offline) expect(await readingsThisSeason(t.treeId)).toHaveLength(0);
+    for (const t of measuredOffline) expect(await readingsThisSeason(t.treeId)).toHaveLength(0);
 
     // Meanwhile the owner marks the next tree removed, from another device.
     const refusedTree = await measureCurrent(page);
@@ -130,17 +139,17 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     expect(patched.status()).toBe(200);
     await owner.close();
 
-    await context.setOffline(false);
+    await offline(false);
     await expect
       .poll(
         async () =>
-          (await Promise.all(offline.map((t) => readingsThisSeason(t.treeId)))).map(
+          (await Promise.all(measuredOffline.map((t) => readingsThisSeason(t.treeId)))).map(
             (r) => r.length,
           ),
         { timeout: 20000 },
       )
       .toEqual([1, 1]);
-    for (const t of offline) {
+    for (const t of measuredOffline) {
       const [row] = await readingsThisSeason(t.treeId);
       expect(row.client_id).toMatch(/^[0-9a-f-]{36}$/);
       expect(row.crown_dieback_pct).toBe(5);
@@ -152,13 +161,13 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     expect(await readingsThisSeason(refusedTree.treeId)).toHaveLength(0);
 
     // Signing out would lose the refused entry and one waiting offline: the app says so first.
-    await context.setOffline(true);
+    await offline(true);
     await measureCurrent(page);
     await page.getByRole('button', { name: 'More' }).click();
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByText('Signing out deletes 2 entries that are not on the server').waitFor();
     await page.getByRole('button', { name: 'Stay signed in' }).click();
-    await context.setOffline(false);
+    await offline(false);
     await expect.poll(() => page.getByText(/waiting to send/).count(), { timeout: 15000 }).toBe(0);
 
     // Signing out anyway forgets the refused entry: the next person on this phone sees none of it.
@@ -167,12 +176,13 @@ describe('the forester walks the measuring round on a phone, in and out of cover
     await page.getByText('Signing out deletes 1 entry that is not on the server').waitFor();
     await page.getByRole('button', { name: 'Sign out and lose 1' }).click();
     await page.waitForURL(/\/sign-in/);
-    await signInAs(page, env.server.url, 'owner@fernside.example');
+    await signInAs(page, link.url, 'owner@fernside.example');
     await page.waitForURL(/\/sugarbushes\/\d+\/trees/);
     await page.locator('main h1').waitFor();
     expect(await page.getByText(/not accepted|waiting to send/).count()).toBe(0);
     expect(offSite(hosts)).toEqual([]);
     await context.close();
+    await link.close();
   });
 
   it('the round page passes axe, fits the screen and keeps its buttons 44 px tall, on a phone and on a laptop', async () => {

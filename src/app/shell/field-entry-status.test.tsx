@@ -1,6 +1,7 @@
-import { onlineManager } from '@tanstack/react-query';
+import { onlineManager, QueryObserver } from '@tanstack/react-query';
 import { act, screen, waitFor, within } from '@testing-library/react';
 import { registerFieldEntryDefaults, refusedEntries, type FieldEntry } from '@/lib/field-entries';
+import { treeDetailKeys } from '@/lib/tree-detail-keys';
 import { json, mockApi } from '@/test/api-mock';
 import { meAs } from '@/test/fixtures';
 import { renderPage } from '@/test/render';
@@ -92,6 +93,39 @@ const weather: FieldEntry = {
   sugarbushId: 3,
   input: { date: '2026-03-14', minC: -4, maxC: 5 },
 };
+
+describe('an entry the server stored', () => {
+  it('when the refresh after its answer cannot finish (the device went offline), then it no longer counts as waiting to send', async () => {
+    mockApi({
+      'GET /api/auth/me': meAs('forester'),
+      'POST /api/trees/5/measurements': json(201, { id: 1 }),
+    });
+    const { queryClient } = renderPage({ path: '/', url: '/', element: <FieldEntryStatus /> });
+    registerFieldEntryDefaults(queryClient);
+    // The tree's page is open: the answer refreshes it, and that read never comes back.
+    let reads = 0;
+    const treePage = new QueryObserver(queryClient, {
+      queryKey: treeDetailKeys.tree(5),
+      queryFn: () => (reads++ === 0 ? Promise.resolve({ id: 5 }) : new Promise(() => undefined)),
+    });
+    const unsubscribe = treePage.subscribe(() => undefined);
+    await waitFor(() => expect(treePage.getCurrentResult().status).toBe('success'));
+    let sent = false;
+    act(() => {
+      void queryClient
+        .getMutationCache()
+        .build(queryClient, { mutationKey: ['field-entry'] })
+        .execute(entry)
+        .then(() => (sent = true));
+    });
+    await waitFor(() => expect(sent).toBe(true));
+    expect(reads).toBe(2);
+    expect(treePage.getCurrentResult().fetchStatus).toBe('fetching');
+    expect(screen.queryByText(/waiting to send/)).not.toBeInTheDocument();
+    expect(queryClient.isMutating({ mutationKey: ['field-entry'] })).toBe(0);
+    unsubscribe();
+  });
+});
 
 describe('a stand’s sap and weather in the queue', () => {
   afterEach(() => act(() => onlineManager.setOnline(true)));

@@ -83,7 +83,12 @@ export function registerFieldEntryDefaults(queryClient: QueryClient): void {
     retry: (_failures: number, error: unknown) =>
       !isRefusal(error) && !(error instanceof OtherAuthorError),
     retryDelay: (failures: number) => Math.min(1000 * 2 ** failures, MAX_RETRY_DELAY_MS),
-    onSuccess: (_result: unknown, entry: FieldEntry) => refreshAfterFieldEntry(queryClient, entry),
+    // Not awaited: the entry is on the server once it answers. Awaited, the refetches (which
+    // wait for the network like any read) kept it counted as waiting to send, and in the
+    // sign-out warning, when the device went offline just after an answer.
+    onSuccess: (_result: unknown, entry: FieldEntry) => {
+      void refreshAfterFieldEntry(queryClient, entry);
+    },
     onError: (error: unknown, entry: FieldEntry) => {
       if (!isRefusal(error) || !isApiError(error)) return;
       refusedEntries.add({
