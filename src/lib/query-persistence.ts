@@ -31,7 +31,8 @@ const keptRoots = new Set<unknown>([
   queryRoots.seasonLog[0],
 ]);
 
-const CACHE_KEY = 'query-cache';
+/** The device key of the kept reads. */
+export const CACHE_KEY = 'query-cache';
 /** The device key of the field entries waiting to be sent. */
 export const QUEUE_KEY = 'field-entry-queue';
 const OWNER_KEY = 'owner';

@@ -1,7 +1,8 @@
 import type { Page } from 'playwright-core';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DEVICE_DB, DEVICE_STORE } from '../../src/lib/device-store';
-import { QUEUE_KEY } from '../../src/lib/query-persistence';
+import { CACHE_KEY, QUEUE_KEY } from '../../src/lib/query-persistence';
+import { queryRoots } from '../../src/lib/query-roots';
 import { refreshTrees } from '../../server/modules/advice/refresh-trees';
 import { cuttableLink, demoServerAndBrowser, offSite, recordHosts, signInAs } from './harness';
 import { checkedViewports, expectReadable, shortButtons, signedInForChecks } from './page-checks';
@@ -61,6 +62,28 @@ const keptQueueLength = (at: { db: string; store: string; key: string }) =>
   });
 const queueAt = { db: DEVICE_DB, store: DEVICE_STORE, key: QUEUE_KEY };
 
+/** Trees the round kept on the device counts as measured (-1 while it keeps no round). */
+const keptRoundMeasured = (at: { db: string; store: string; key: string; root: string }) =>
+  new Promise<number>((resolve) => {
+    const open = indexedDB.open(at.db);
+    open.onerror = () => resolve(-1);
+    open.onsuccess = () => {
+      const db = open.result;
+      if (!db.objectStoreNames.contains(at.store)) return resolve(-1);
+      const read = db.transaction(at.store).objectStore(at.store).get(at.key);
+      read.onsuccess = () => {
+        const queries = (read.result?.queries ?? []) as {
+          queryKey: unknown[];
+          state: { data?: { measured?: number[] } };
+        }[];
+        const round = queries.find((q) => q.queryKey[0] === at.root && q.state.data?.measured);
+        resolve(round ? round.state.data!.measured!.reduce((a, b) => a + b, 0) : -1);
+      };
+      read.onerror = () => resolve(-1);
+    };
+  });
+const roundAt = { db: DEVICE_DB, store: DEVICE_STORE, key: CACHE_KEY, root: queryRoots.round[0] };
+
 const openRound = async (page: Page, base = env.server.url) => {
   await page.goto(`${base}/sugarbushes/${standId}/round`);
   await page.locator('#round-tree').waitFor({ timeout: 20000 });
@@ -107,6 +130,9 @@ describe('the forester walks the measuring round on a phone, in and out of cover
         { timeout: 15000 },
       )
       .toEqual([1, 1, 1]);
+    // The device keeps the round as read again after the third reading before the phone goes
+    // out of coverage: after a reload offline, only what it kept counts.
+    await expect.poll(() => page.evaluate(keptRoundMeasured, roundAt), { timeout: 15000 }).toBe(3);
 
     await offline(true);
     const measuredOffline = [await measureCurrent(page), await measureCurrent(page)];
