@@ -47,42 +47,43 @@ async function measureCurrent(page: Page): Promise<{ tag: string; treeId: number
   return { tag, treeId: tree.id };
 }
 
-/** How many field entries the device's store holds for sending (read in the page). */
-const keptQueueLength = (at: { db: string; store: string; key: string }) =>
-  new Promise<number>((resolve) => {
+/** What the device's store keeps under `key` (read in the page; undefined when nothing). */
+const keptOnDevice = (at: { db: string; store: string; key: string }) =>
+  new Promise<unknown>((resolve) => {
     const open = indexedDB.open(at.db);
-    open.onerror = () => resolve(-1);
+    open.onerror = () => resolve(undefined);
     open.onsuccess = () => {
       const db = open.result;
-      if (!db.objectStoreNames.contains(at.store)) return resolve(0);
+      if (!db.objectStoreNames.contains(at.store)) return resolve(undefined);
       const read = db.transaction(at.store).objectStore(at.store).get(at.key);
-      read.onsuccess = () => resolve(Array.isArray(read.result) ? read.result.length : 0);
-      read.onerror = () => resolve(-1);
+      read.onsuccess = () => resolve(read.result);
+      read.onerror = () => resolve(undefined);
     };
   });
-const queueAt = { db: DEVICE_DB, store: DEVICE_STORE, key: QUEUE_KEY };
+
+/** How many field entries the device holds for sending. */
+const keptQueueLength = async (page: Page) => {
+  const queue = await page.evaluate(keptOnDevice, {
+    db: DEVICE_DB,
+    store: DEVICE_STORE,
+    key: QUEUE_KEY,
+  });
+  return Array.isArray(queue) ? queue.length : 0;
+};
 
 /** Trees the round kept on the device counts as measured (-1 while it keeps no round). */
-const keptRoundMeasured = (at: { db: string; store: string; key: string; root: string }) =>
-  new Promise<number>((resolve) => {
-    const open = indexedDB.open(at.db);
-    open.onerror = () => resolve(-1);
-    open.onsuccess = () => {
-      const db = open.result;
-      if (!db.objectStoreNames.contains(at.store)) return resolve(-1);
-      const read = db.transaction(at.store).objectStore(at.store).get(at.key);
-      read.onsuccess = () => {
-        const queries = (read.result?.queries ?? []) as {
-          queryKey: unknown[];
-          state: { data?: { measured?: number[] } };
-        }[];
-        const round = queries.find((q) => q.queryKey[0] === at.root && q.state.data?.measured);
-        resolve(round ? round.state.data!.measured!.reduce((a, b) => a + b, 0) : -1);
-      };
-      read.onerror = () => resolve(-1);
-    };
-  });
-const roundAt = { db: DEVICE_DB, store: DEVICE_STORE, key: CACHE_KEY, root: queryRoots.round[0] };
+const keptRoundMeasured = async (page: Page) => {
+  const cache = (await page.evaluate(keptOnDevice, {
+    db: DEVICE_DB,
+    store: DEVICE_STORE,
+    key: CACHE_KEY,
+  })) as
+    { queries?: { queryKey: unknown[]; state: { data?: { measured?: number[] } } }[] } | undefined;
+  const round = cache?.queries?.find(
+    (q) => q.queryKey[0] === queryRoots.round[0] && q.state.data?.measured,
+  );
+  return round ? round.state.data!.measured!.reduce((a, b) => a + b, 0) : -1;
+};
 
 const openRound = async (page: Page, base = env.server.url) => {
   await page.goto(`${base}/sugarbushes/${standId}/round`);
@@ -132,14 +133,14 @@ describe('the forester walks the measuring round on a phone, in and out of cover
       .toEqual([1, 1, 1]);
     // The device keeps the round as read again after the third reading before the phone goes
     // out of coverage: after a reload offline, only what it kept counts.
-    await expect.poll(() => page.evaluate(keptRoundMeasured, roundAt), { timeout: 15000 }).toBe(3);
+    await expect.poll(() => keptRoundMeasured(page), { timeout: 15000 }).toBe(3);
 
     await offline(true);
     const measuredOffline = [await measureCurrent(page), await measureCurrent(page)];
     await page.getByText('2 waiting to send').waitFor();
     // The entries are on the device (IndexedDB) before the page goes: a reload a moment after
     // the tap could otherwise outrun the write on a loaded machine.
-    await expect.poll(() => page.evaluate(keptQueueLength, queueAt), { timeout: 10000 }).toBe(2);
+    await expect.poll(() => keptQueueLength(page), { timeout: 10000 }).toBe(2);
 
     // Reloaded without a network: the shell comes from the service worker, the queue from IndexedDB.
     await page.reload();

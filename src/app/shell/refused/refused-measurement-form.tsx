@@ -1,9 +1,6 @@
-import {
-  crownDiebackClasses,
-  measurementInputSchema,
-  type MeasurementInput,
-} from '@shared/schemas/measurement';
-import { controlClass, Field } from '@/components/ui/field';
+import { measurementInputSchema, type MeasurementInput } from '@shared/schemas/measurement';
+import { CrownDiebackSelect, ReadingNoteField } from '@/components/reading-fields';
+import { TextField } from '@/components/ui/text-field';
 import type { RefusedEntry } from '@/lib/field-entries';
 import { RefusedFormActions } from './refused-form-actions';
 import { noteOrNull, optionalNumber, useRefusedForm } from './use-refused-form';
@@ -42,49 +39,29 @@ export function RefusedMeasurementForm({
   );
   return (
     <form noValidate onSubmit={onSubmit} className="mt-3 flex flex-col gap-3">
-      <Field label="Date" error={errors.measuredOn?.message}>
-        {(control) => (
-          <input
-            {...control}
-            {...form.register('measuredOn')}
-            type="date"
-            className={controlClass}
-          />
-        )}
-      </Field>
-      <Field label="DBH (cm)" error={errors.dbhCm?.message}>
-        {(control) => (
-          <input
-            {...control}
-            {...form.register('dbhCm', { valueAsNumber: true })}
-            type="number"
-            step="0.1"
-            inputMode="decimal"
-            className={controlClass}
-          />
-        )}
-      </Field>
-      <Field label="Crown dieback" error={errors.crownDiebackPct?.message}>
-        {(control) => (
-          <select
-            {...control}
-            {...form.register('crownDiebackPct', { setValueAs: optionalNumber })}
-            className={controlClass}
-          >
-            <option value="">Not rated</option>
-            {crownDiebackClasses.map((pct) => (
-              <option key={pct} value={pct}>
-                {pct} %
-              </option>
-            ))}
-          </select>
-        )}
-      </Field>
-      <Field label="Note" error={errors.note?.message}>
-        {(control) => (
-          <textarea {...control} {...form.register('note')} rows={2} className={controlClass} />
-        )}
-      </Field>
+      <TextField
+        label="Date"
+        type="date"
+        error={errors.measuredOn?.message}
+        {...form.register('measuredOn')}
+      />
+      <TextField
+        label="DBH (cm)"
+        type="number"
+        step="0.1"
+        inputMode="decimal"
+        error={errors.dbhCm?.message}
+        {...form.register('dbhCm', { valueAsNumber: true })}
+      />
+      <CrownDiebackSelect
+        registration={form.register('crownDiebackPct', { setValueAs: optionalNumber })}
+        error={errors.crownDiebackPct?.message}
+      />
+      <ReadingNoteField
+        label="Note"
+        registration={form.register('note')}
+        error={errors.note?.message}
+      />
       {refused.code === 'unconfirmed-outlier' && (
         <label className="inline-flex min-h-11 items-center gap-2">
           <input {...form.register('confirmedOutlier')} type="checkbox" className="h-5 w-5" />I

@@ -1,11 +1,10 @@
-import { collections } from '@shared/schemas/enums';
 import { sapEntryInputSchema, type SapEntryInput } from '@shared/schemas/sap';
 import { controlClass, Field } from '@/components/ui/field';
 import { TextField } from '@/components/ui/text-field';
-import { collectionLabels } from '@/lib/collection-labels';
 import type { RefusedEntry } from '@/lib/field-entries';
+import { CollectionSelect } from './collection-select';
 import { RefusedFormActions } from './refused-form-actions';
-import { noteOrNull, optionalNumber, useRefusedForm } from './use-refused-form';
+import { decimalInput, noteOrNull, optionalNumber, useRefusedForm } from './use-refused-form';
 
 const fields = [
   'collectedOn',
@@ -16,8 +15,6 @@ const fields = [
   'syrupMadeL',
   'note',
 ] as const;
-
-const decimal = { type: 'number', step: 'any', inputMode: 'decimal' } as const;
 
 /**
  * Edits a refused day of sap before it is sent again, in litres and °C as the API holds it. The
@@ -61,41 +58,30 @@ export function RefusedSapForm({
       />
       <TextField
         label="Sap (L)"
-        {...decimal}
+        {...decimalInput}
         error={errors.volumeL?.message}
         {...form.register('volumeL', { valueAsNumber: true })}
       />
       <TextField
         label="Sugar (°Brix)"
-        {...decimal}
+        {...decimalInput}
         error={errors.sugarPct?.message}
         {...form.register('sugarPct', { valueAsNumber: true })}
       />
       <TextField
         label="Held at (°C)"
-        {...decimal}
+        {...decimalInput}
         error={errors.heldAtC?.message}
         {...form.register('heldAtC', { setValueAs: optionalNumber })}
       />
-      <Field label="Collection" error={errors.collection?.message}>
-        {(control) => (
-          <select
-            {...control}
-            {...form.register('collection', { setValueAs: (v) => (v === '' ? null : v) })}
-            className={controlClass}
-          >
-            <option value="">Not given</option>
-            {collections.map((c) => (
-              <option key={c} value={c}>
-                {collectionLabels[c]}
-              </option>
-            ))}
-          </select>
-        )}
-      </Field>
+      <CollectionSelect
+        registration={form.register('collection', { setValueAs: (v) => (v === '' ? null : v) })}
+        error={errors.collection?.message}
+        none="Not given"
+      />
       <TextField
         label="Syrup made (L)"
-        {...decimal}
+        {...decimalInput}
         error={errors.syrupMadeL?.message}
         {...form.register('syrupMadeL', { setValueAs: optionalNumber })}
       />

@@ -1,11 +1,10 @@
-import { collections } from '@shared/schemas/enums';
 import { tapholeInputSchema, type TapholeInput } from '@shared/schemas/taphole';
 import { controlClass, Field } from '@/components/ui/field';
 import { TextField } from '@/components/ui/text-field';
-import { collectionLabels } from '@/lib/collection-labels';
 import type { RefusedEntry } from '@/lib/field-entries';
+import { CollectionSelect } from './collection-select';
 import { RefusedFormActions } from './refused-form-actions';
-import { useRefusedForm } from './use-refused-form';
+import { decimalInput, useRefusedForm } from './use-refused-form';
 
 const fields = [
   'season',
@@ -17,8 +16,6 @@ const fields = [
   'drilledOn',
   'stainHit',
 ] as const;
-
-const decimal = { type: 'number', step: 'any', inputMode: 'decimal' } as const;
 
 /** "yes" / "no" / "" (not noted) in the select; true / false / null in the entry. */
 const stainFromSelect = (v: string) => (v === 'yes' ? true : v === 'no' ? false : null);
@@ -67,39 +64,32 @@ export function RefusedTapholeForm({
       />
       <TextField
         label="Height (cm)"
-        {...decimal}
+        {...decimalInput}
         error={errors.heightCm?.message}
         {...form.register('heightCm', { valueAsNumber: true })}
       />
       <TextField
         label="Azimuth (°)"
-        {...decimal}
+        {...decimalInput}
         error={errors.azimuthDeg?.message}
         {...form.register('azimuthDeg', { valueAsNumber: true })}
       />
       <TextField
         label="Depth (cm)"
-        {...decimal}
+        {...decimalInput}
         error={errors.depthCm?.message}
         {...form.register('depthCm', { valueAsNumber: true })}
       />
       <TextField
         label="Bit (cm)"
-        {...decimal}
+        {...decimalInput}
         error={errors.bitCm?.message}
         {...form.register('bitCm', { valueAsNumber: true })}
       />
-      <Field label="Collection" error={errors.collection?.message}>
-        {(control) => (
-          <select {...control} {...form.register('collection')} className={controlClass}>
-            {collections.map((c) => (
-              <option key={c} value={c}>
-                {collectionLabels[c]}
-              </option>
-            ))}
-          </select>
-        )}
-      </Field>
+      <CollectionSelect
+        registration={form.register('collection')}
+        error={errors.collection?.message}
+      />
       <TextField
         label="Drilled on"
         type="date"

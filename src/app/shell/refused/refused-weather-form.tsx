@@ -2,11 +2,9 @@ import { weatherDayInputSchema, type WeatherDayInput } from '@shared/schemas/wea
 import { TextField } from '@/components/ui/text-field';
 import type { RefusedEntry } from '@/lib/field-entries';
 import { RefusedFormActions } from './refused-form-actions';
-import { useRefusedForm } from './use-refused-form';
+import { decimalInput, useRefusedForm } from './use-refused-form';
 
 const fields = ['date', 'minC', 'maxC'] as const;
-
-const decimal = { type: 'number', step: 'any', inputMode: 'decimal' } as const;
 
 /**
  * Edits a refused day of weather before it is sent again, in °C as the API holds it. The
@@ -35,13 +33,13 @@ export function RefusedWeatherForm({
       <TextField label="Day" type="date" error={errors.date?.message} {...form.register('date')} />
       <TextField
         label="Night low (°C)"
-        {...decimal}
+        {...decimalInput}
         error={errors.minC?.message}
         {...form.register('minC', { valueAsNumber: true })}
       />
       <TextField
         label="Day high (°C)"
-        {...decimal}
+        {...decimalInput}
         error={errors.maxC?.message}
         {...form.register('maxC', { valueAsNumber: true })}
       />

@@ -15,6 +15,9 @@ import { applyServerErrors } from '@/lib/form-errors';
 /** An empty box is "not given" (null); anything else a number, which the schema then checks. */
 export const optionalNumber = (v: unknown) => (v === '' || v === null ? null : Number(v));
 
+/** The props of a box for a decimal number (a phone shows its number pad). */
+export const decimalInput = { type: 'number', step: 'any', inputMode: 'decimal' } as const;
+
 /** An empty note is no note. */
 export const noteOrNull = (note: string | null | undefined) => (note ? note : null);
 
